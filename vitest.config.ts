@@ -1,0 +1,50 @@
+import path from "node:path";
+import { defineConfig } from "vitest/config";
+
+const alias = { "@": path.resolve(import.meta.dirname) };
+
+/**
+ * Three projects, run by `npm test` (scripts/test.mjs):
+ * - unit: pure code (sim/, components' logic), no services;
+ * - integration: against a throwaway PostgreSQL cluster and the mail/storage fakes (tests/setup/services.ts);
+ * - browser: the built app in Debian's Chromium through playwright-core (tests/setup/app.ts).
+ */
+export default defineConfig({
+  resolve: { alias },
+  test: {
+    projects: [
+      {
+        resolve: { alias },
+        test: {
+          name: "unit",
+          include: ["sim/**/*.test.ts", "components/**/*.test.{ts,tsx}", "tests/unit/**/*.test.{ts,tsx}"],
+          environment: "node",
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: "integration",
+          include: ["tests/integration/**/*.test.ts", "db/**/*.test.ts"],
+          environment: "node",
+          globalSetup: ["tests/setup/services.ts"],
+          fileParallelism: false,
+          testTimeout: 30_000,
+          hookTimeout: 120_000,
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: "browser",
+          include: ["tests/browser/**/*.test.ts"],
+          environment: "node",
+          globalSetup: ["tests/setup/app.ts"],
+          fileParallelism: false,
+          testTimeout: 60_000,
+          hookTimeout: 300_000,
+        },
+      },
+    ],
+  },
+});
