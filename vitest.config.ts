@@ -1,13 +1,18 @@
 import path from "node:path";
 import { defineConfig } from "vitest/config";
 
-const alias = { "@": path.resolve(import.meta.dirname) };
+const alias = {
+  "@": path.resolve(import.meta.dirname),
+  // db/ marks itself server-only for Next; under vitest it runs in Node directly.
+  "server-only": path.resolve(import.meta.dirname, "tests/setup/empty-module.ts"),
+};
 
 /**
  * Three projects, run by `npm test` (scripts/test.mjs):
  * - unit: pure code (sim/, components' logic), no services;
  * - integration: against a throwaway PostgreSQL cluster and the mail/storage fakes (tests/setup/services.ts);
- * - browser: the built app in Debian's Chromium through playwright-core (tests/setup/app.ts).
+ * - app: the built app served by `next start`, tried over HTTP and in Debian's Chromium through playwright-core
+ *   (tests/setup/app.ts).
  */
 export default defineConfig({
   resolve: { alias },
@@ -36,8 +41,8 @@ export default defineConfig({
       {
         resolve: { alias },
         test: {
-          name: "browser",
-          include: ["tests/browser/**/*.test.ts"],
+          name: "app",
+          include: ["tests/app/**/*.test.ts"],
           environment: "node",
           globalSetup: ["tests/setup/app.ts"],
           fileParallelism: false,

@@ -1,0 +1,31 @@
+import type { Metadata, Viewport } from "next";
+import type { ReactNode } from "react";
+import { SiteFooter } from "@/components/shell/site-footer";
+import { SiteHeader } from "@/components/shell/site-header";
+import { displayFont, monoFont, textFont } from "./fonts";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Backplate", template: "%s · Backplate" },
+  description:
+    "Design, simulate and review condenser-microphone front ends: response into real loads, sensitivity, self-noise, spread.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#15181c" };
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en" className={`${displayFont.variable} ${textFont.variable} ${monoFont.variable}`}>
+      <body className="flex min-h-screen flex-col">
+        <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-paper focus:p-2">
+          Skip to content
+        </a>
+        <SiteHeader />
+        <main id="main" className="flex-1">
+          {children}
+        </main>
+        <SiteFooter />
+      </body>
+    </html>
+  );
+}

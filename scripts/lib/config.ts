@@ -1,0 +1,17 @@
+/**
+ * Settings for the launchers, each from an environment variable with a default (the README lists them all).
+ */
+import path from "node:path";
+
+export const PROJECT_ROOT = path.resolve(import.meta.dirname, "..", "..");
+
+export const launcherConfig = {
+  /** Port of the private PostgreSQL cluster that `npm start` runs. */
+  pgPort: Number(process.env.BACKPLATE_PG_PORT ?? 54329),
+  /** Where that cluster keeps its files. */
+  pgDataDir: process.env.BACKPLATE_PG_DATA ?? path.join(PROJECT_ROOT, ".data", "postgres"),
+  database: process.env.BACKPLATE_PG_DATABASE ?? "backplate",
+  /** Where the app listens. */
+  host: process.env.HOST ?? "127.0.0.1",
+  port: Number(process.env.PORT ?? 3000),
+};
