@@ -3,8 +3,9 @@
  * and mV/Pa, and the equivalent noise level of a microphone from its self-noise and sensitivity.
  * Pressures are RMS pascals; voltages RMS volts.
  */
-import { REFERENCE_PRESSURE_PA } from "../constants";
+
 import { requireFinite, requirePositive } from "../calculators/validate";
+import { REFERENCE_PRESSURE_PA } from "../constants";
 
 export { rmsFromAmplitudeDensity, rmsFromPowerDensity } from "./weighted-rms";
 

@@ -14,9 +14,6 @@
  */
 export * from "../acoustics/a-weighting";
 export * from "../acoustics/c-weighting";
-export * from "../acoustics/z-weighting";
-export * from "../acoustics/weighting";
-export * from "../acoustics/weighted-rms";
 export {
   dbReVPerPaToSensitivity,
   equivalentNoiseLevel,
@@ -26,9 +23,12 @@ export {
   sensitivityToMvPerPa,
   splToPascals,
 } from "../acoustics/spl";
-export * from "./thermal-noise";
-export * from "./capsule-physics";
+export * from "../acoustics/weighted-rms";
+export * from "../acoustics/weighting";
+export * from "../acoustics/z-weighting";
 export * from "./bias-network";
-export * from "./phantom";
 export * from "./cable-loading";
+export * from "./capsule-physics";
 export * from "./noise-figure";
+export * from "./phantom";
+export * from "./thermal-noise";
