@@ -25,14 +25,63 @@ export const designStatusEnum = pgEnum("design_status", ["draft", "in_review", "
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
 
+/** People. The column names next-auth's adapter reads (name, email, emailVerified, image) keep its meaning. */
 export const users = pgTable("users", {
   id: uuid("id").primaryKey().defaultRandom(),
   email: text("email").notNull(),
-  name: text("name").notNull(),
+  name: text("name"),
+  /** bcrypt hash; null for people who only sign in by e-mailed link. */
   passwordHash: text("password_hash"),
-  emailVerified: timestamp("email_verified", { withTimezone: true }),
+  emailVerified: timestamp("email_verified", { withTimezone: true, mode: "date" }),
+  image: text("image"),
   createdAt: createdAt(),
 }, (t) => [uniqueIndex("users_email_lower").on(sql`lower(${t.email})`)]);
+
+/** next-auth's linked sign-in accounts (kept for the adapter; Backplate signs in by password or e-mailed link). */
+export const accounts = pgTable("accounts", {
+  userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  type: text("type").$type<"email" | "oauth" | "oidc" | "webauthn">().notNull(),
+  provider: text("provider").notNull(),
+  providerAccountId: text("provider_account_id").notNull(),
+  refresh_token: text("refresh_token"),
+  access_token: text("access_token"),
+  expires_at: integer("expires_at"),
+  token_type: text("token_type"),
+  scope: text("scope"),
+  id_token: text("id_token"),
+  session_state: text("session_state"),
+}, (t) => [primaryKey({ columns: [t.provider, t.providerAccountId] })]);
+
+/** Database sessions (unused with signed-cookie sessions; present because the adapter expects the table). */
+export const sessions = pgTable("sessions", {
+  sessionToken: text("session_token").primaryKey(),
+  userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  expires: timestamp("expires", { withTimezone: true, mode: "date" }).notNull(),
+});
+
+/** One-time tokens of e-mailed sign-in links (next-auth stores them hashed). */
+export const verificationTokens = pgTable("verification_tokens", {
+  identifier: text("identifier").notNull(),
+  token: text("token").notNull(),
+  expires: timestamp("expires", { withTimezone: true, mode: "date" }).notNull(),
+}, (t) => [primaryKey({ columns: [t.identifier, t.token] })]);
+
+/** Password-reset links: the token is stored as a SHA-256 hash and used once. */
+export const passwordResetTokens = pgTable("password_reset_tokens", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  tokenHash: text("token_hash").notNull().unique(),
+  expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+  usedAt: timestamp("used_at", { withTimezone: true }),
+  createdAt: createdAt(),
+});
+
+/** Fixed-window counters for rate limits (sign-in attempts per e-mail and per address). */
+export const rateLimits = pgTable("rate_limits", {
+  key: text("key").primaryKey(),
+  count: integer("count").notNull(),
+  windowStartedAt: timestamp("window_started_at", { withTimezone: true }).notNull(),
+});
 
 export const workspaces = pgTable("workspaces", {
   id: uuid("id").primaryKey().defaultRandom(),
@@ -52,6 +101,20 @@ export const memberships = pgTable("memberships", {
   createdAt: createdAt(),
 }, (t) => [primaryKey({ columns: [t.workspaceId, t.userId] }), index("memberships_user").on(t.userId)]);
 
+/** An invitation by e-mail to join a workspace with a role; the token is stored hashed and expires. */
+export const invitations = pgTable("invitations", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  workspaceId: uuid("workspace_id").notNull().references(() => workspaces.id, { onDelete: "cascade" }),
+  email: text("email").notNull(),
+  role: roleEnum("role").notNull(),
+  tokenHash: text("token_hash").notNull().unique(),
+  invitedBy: uuid("invited_by").notNull().references(() => users.id),
+  expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+  acceptedAt: timestamp("accepted_at", { withTimezone: true }),
+  revokedAt: timestamp("revoked_at", { withTimezone: true }),
+  createdAt: createdAt(),
+}, (t) => [index("invitations_workspace").on(t.workspaceId)]);
+
 export const designs = pgTable("designs", {
   id: uuid("id").primaryKey().defaultRandom(),
   workspaceId: uuid("workspace_id").notNull().references(() => workspaces.id, { onDelete: "cascade" }),
@@ -61,6 +124,9 @@ export const designs = pgTable("designs", {
   createdBy: uuid("created_by").notNull().references(() => users.id),
   /** The newest revision; a save must name it as its parent or it is refused with 409. */
   headRevisionId: uuid("head_revision_id"),
+  /** Set when the design was forked from another (possibly in another workspace). */
+  forkedFromDesignId: uuid("forked_from_design_id"),
+  forkedFromRevisionId: uuid("forked_from_revision_id"),
   createdAt: createdAt(),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   /** Soft delete: the design and its revisions stay, hidden, until restored. */
@@ -82,6 +148,28 @@ export const designRevisions = pgTable("design_revisions", {
   authorId: uuid("author_id").notNull().references(() => users.id),
   createdAt: createdAt(),
 }, (t) => [uniqueIndex("design_revisions_number").on(t.designId, t.number)]);
+
+/**
+ * A bench link: read-only access to one revision (or to the design's latest when revisionId is null). The token
+ * (at least 128 bits) is shown once and stored as a SHA-256 hash.
+ */
+export const shareLinks = pgTable("share_links", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  designId: uuid("design_id").notNull().references(() => designs.id, { onDelete: "cascade" }),
+  revisionId: uuid("revision_id").references(() => designRevisions.id, { onDelete: "cascade" }),
+  tokenHash: text("token_hash").notNull().unique(),
+  label: text("label").notNull().default(""),
+  /** The view the link opens: plot, variant, destination, frequency range. */
+  view: jsonb("view").notNull().default({}),
+  /** Whether the link opens without signing in (only where the workspace allows public links). */
+  isPublic: boolean("is_public").notNull().default(false),
+  createdBy: uuid("created_by").notNull().references(() => users.id),
+  expiresAt: timestamp("expires_at", { withTimezone: true }),
+  revokedAt: timestamp("revoked_at", { withTimezone: true }),
+  accessCount: integer("access_count").notNull().default(0),
+  lastAccessedAt: timestamp("last_accessed_at", { withTimezone: true }),
+  createdAt: createdAt(),
+}, (t) => [index("share_links_design").on(t.designId)]);
 
 export const auditLog = pgTable("audit_log", {
   id: bigserial("id", { mode: "number" }).primaryKey(),
