@@ -1,0 +1,131 @@
+/**
+ * The one interface every device kind implements (one module per kind in this folder).
+ *
+ * Unknowns follow modified nodal analysis (Ho, Ruehli and Brennan, 1975): one voltage per non-ground net, plus
+ * whatever extra unknowns a kind asks for (a voltage source's branch current, a transformer's internal node).
+ * Row convention: a net's row sums the currents LEAVING that net through device pins (A); a branch row is the
+ * branch's voltage equation (V). A device stamps
+ * - DC: its Newton companion (Jacobian entries and right-hand side linearised at the present iterate), limiting
+ *   its junction voltages between iterations where it is nonlinear;
+ * - AC: its small-signal matrix at the operating point split as G + jωC — exact for every v1 kind, because every
+ *   reactance is a capacitance or an inductance carried by a branch current (the −L sits in C) — and, for
+ *   sources and capsules, its drive on the right-hand side at a given frequency;
+ * - its report: region, small-signal parameters and warnings at the operating point;
+ * - its noise generators at the operating point (used by the noise analysis).
+ */
+import type { ElaboratedPart } from "../circuit/types";
+import type { PatternBuilder } from "../mna/pattern";
+import type { OpValue, SimWarning } from "../results";
+
+export type UnknownKind = "voltage" | "current";
+
+export interface ExtraUnknown {
+  /** shown in messages: "branch current", "internal node p1′", … */
+  label: string;
+  kind: UnknownKind;
+}
+
+/** What a device is given when it is created: where its pins and its extra unknowns are. */
+export interface DeviceWiring {
+  /** unknown index of the net on each pin; −1 for ground */
+  pins: Record<string, number>;
+  /** indices of the extra unknowns, in the order `extraUnknowns` listed them */
+  extra: number[];
+}
+
+/** The Newton iteration's view, given to `stampDc`. */
+export interface DcStampContext {
+  /** present iterate, by unknown (V for nets and internal nodes, A for branch currents) */
+  readonly x: Float64Array;
+  /** thermal voltage kT/q at the analysis temperature, V */
+  readonly thermalVoltage: number;
+  /** 0…1: independent DC sources are multiplied by this (source stepping) */
+  readonly sourceScale: number;
+  /** add to the Jacobian entry behind a handle */
+  add(handle: number, value: number): void;
+  /** add to the right-hand side of a row (ignored for ground, row < 0) */
+  addRhs(row: number, value: number): void;
+  /** a device reports that it limited a junction step: this iterate cannot count as converged */
+  markLimited(): void;
+}
+
+export interface AcStampContext {
+  /** the operating point, by unknown */
+  readonly x: Float64Array;
+  readonly thermalVoltage: number;
+  addConductance(handle: number, value: number): void;
+  /** coefficient of jω */
+  addReactance(handle: number, value: number): void;
+}
+
+export interface AcDriveContext {
+  /** the operating point, by unknown (a capsule's polarisation comes from it) */
+  readonly x: Float64Array;
+  /** Hz */
+  readonly frequency: number;
+  /** acoustic drive on every capsule, Pa */
+  readonly pressure: number;
+  addRhs(row: number, re: number, im: number): void;
+}
+
+export interface OperatingPointView {
+  readonly x: Float64Array;
+  readonly thermalVoltage: number;
+  /** K */
+  readonly temperature: number;
+}
+
+export interface DeviceReport {
+  values: Record<string, OpValue>;
+  warnings: SimWarning[];
+}
+
+/**
+ * A noise generator: a random source on the right-hand side between two rows, `plus` receiving +1 and `minus`
+ * −1 (either may be −1 for ground). Between two nets it is a current generator (psd in A²/Hz) driving current
+ * into `plus` and out of `minus`; on a branch row (`plus` is the branch row, `minus` −1) it is a voltage generator
+ * in series with that branch (psd in V²/Hz), as the series resistance of an inductor or a cable section needs.
+ */
+export interface NoiseGenerator {
+  part: string;
+  /** which physical mechanism, for the per-part breakdown */
+  label: string;
+  plus: number;
+  minus: number;
+  /** power spectral density at frequency f (Hz) */
+  psd(frequency: number): number;
+}
+
+export interface Device {
+  readonly part: ElaboratedPart;
+  /** reserve every matrix position this device ever writes */
+  declare(pattern: PatternBuilder): void;
+  /** start a Newton run from iterate x (resets junction-limiting memory) */
+  startNewton(x: Float64Array): void;
+  stampDc(ctx: DcStampContext): void;
+  stampAc(ctx: AcStampContext): void;
+  /** sources and capsules only */
+  stampAcDrive?(ctx: AcDriveContext): void;
+  /** null when a kind has nothing to report */
+  report(op: OperatingPointView): DeviceReport | null;
+  noiseSources(op: OperatingPointView): NoiseGenerator[];
+}
+
+export interface DeviceKind {
+  /** extra unknowns of this part beyond its pins' nets */
+  extraUnknowns(part: ElaboratedPart): ExtraUnknown[];
+  create(part: ElaboratedPart, wiring: DeviceWiring): Device;
+}
+
+/** Read a numeric value the elaborator guarantees (defaults filled). */
+export function numberValue(part: ElaboratedPart, name: string): number {
+  const v = part.values[name];
+  if (typeof v !== "number") throw new Error(`internal: ${part.id}.${name} is not a number`);
+  return v;
+}
+
+/** Read an optional numeric value (absent → undefined). */
+export function optionalNumber(part: ElaboratedPart, name: string): number | undefined {
+  const v = part.values[name];
+  return typeof v === "number" ? v : undefined;
+}
