@@ -22,7 +22,8 @@ declare module "vitest" {
   }
 }
 
-export const TEST_DIST_DIR = ".next-test";
+/** Build folder of the app tests; several checkouts or runs at once can each set their own. */
+export const TEST_DIST_DIR = process.env.BACKPLATE_TEST_DIST_DIR || ".next-test";
 const READY_TIMEOUT_MS = 60_000;
 
 async function waitForHealth(url: string, server: ChildProcess) {
