@@ -92,7 +92,7 @@ function frequencyRequest(raw: RawFrequencyFields, defaults: LogGrid, name: stri
     }
     request = { kind: "grid", from, to, pointsPerDecade };
   }
-  if (countFrequencies(request) > MAX_FREQUENCY_POINTS) {
+  if (countFrequencies(request, MAX_FREQUENCY_POINTS) > MAX_FREQUENCY_POINTS) {
     throw new SimError(
       "invalid_analysis",
       `${label}: asks for more than ${MAX_FREQUENCY_POINTS} frequencies. Use fewer points per decade or a narrower range.`,

@@ -8,19 +8,23 @@ import type { FrequencyRequest, LogGrid } from "./types";
 const SAME_FREQUENCY_RELATIVE = 1e-9;
 
 /**
- * Points at `from`·10^(i/pointsPerDecade) (so decade points such as 1 kHz fall on the grid exactly when `from` is a
- * power of ten), then `to` itself.
+ * The grid's points: `from`·10^(i/pointsPerDecade) (so decade points such as 1 kHz fall on the grid exactly when
+ * `from` is a power of ten) below `to`, then `to` itself. Stops after `limit` points.
  */
-export function logGrid({ from, to, pointsPerDecade }: LogGrid): Float64Array {
-  if (to <= from) return Float64Array.of(from);
-  const points: number[] = [];
-  for (let i = 0; ; i += 1) {
+function* gridPoints({ from, to, pointsPerDecade }: LogGrid, limit = Number.POSITIVE_INFINITY): Generator<number> {
+  yield from;
+  if (to <= from) return;
+  let count = 1;
+  for (let i = 1; count < limit; i += 1, count += 1) {
     const f = from * 10 ** (i / pointsPerDecade);
     if (f >= to * (1 - SAME_FREQUENCY_RELATIVE)) break;
-    points.push(f);
+    yield f;
   }
-  points.push(to);
-  return Float64Array.from(points);
+  yield to;
+}
+
+export function logGrid(grid: LogGrid): Float64Array {
+  return Float64Array.from(gridPoints(grid));
 }
 
 /** Expands a request into a sorted, de-duplicated array of frequencies in Hz. */
@@ -30,9 +34,10 @@ export function expandFrequencies(request: FrequencyRequest): Float64Array {
   return sorted.filter((f, i) => i === 0 || f !== sorted[i - 1]);
 }
 
-/** How many points a request gives, without building it. */
-export function countFrequencies(request: FrequencyRequest): number {
+/** How many points a request gives, counting no further than `limit` + 1 (to check a size limit cheaply). */
+export function countFrequencies(request: FrequencyRequest, limit = Number.POSITIVE_INFINITY): number {
   if (request.kind === "list") return new Set(request.frequencies).size;
-  if (request.to <= request.from) return 1;
-  return Math.ceil(Math.log10(request.to / request.from) * request.pointsPerDecade * (1 - SAME_FREQUENCY_RELATIVE)) + 1;
+  let count = 0;
+  for (const _ of gridPoints(request, limit + 1)) count += 1;
+  return count;
 }
