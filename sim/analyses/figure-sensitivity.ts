@@ -75,7 +75,7 @@ function nudgeTargets(file: unknown, variant: string | undefined): NudgeTarget[]
     const spec = KIND_SPECS[part.kind];
     for (const field of Object.keys(written)) {
       const valueSpec = spec.values[field];
-      if (!valueSpec || valueSpec.type !== "number" || NOT_NUDGED_QUANTITIES.has(valueSpec.quantity)) continue;
+      if (valueSpec?.type !== "number" || NOT_NUDGED_QUANTITIES.has(valueSpec.quantity)) continue;
       const value = part.values[field];
       if (typeof value !== "number" || !Number.isFinite(value) || value === 0) continue;
       targets.push({ partIndex, part: part.id, field, value });

@@ -50,6 +50,20 @@ export function matchRowsToColumns(input: MatchInput): Int32Array {
       const depth = stackColumn.length - 1;
       const c = stackColumn[depth];
       const candidates = adjacency[c];
+      // Look-ahead: take a free row of this column before re-routing any matched one. Paths stay short, so a
+      // branch column pairs with its own net's row and that net's column with the branch row (the ±1 entries)
+      // rather than with a small conductance further along a chain.
+      if (stackNext[depth] === 0) {
+        const free = candidates.find((r) => columnForRow[r] < 0);
+        if (free !== undefined) {
+          viaRow.push(free);
+          for (let d = depth; d >= 0; d--) {
+            rowForColumn[stackColumn[d]] = viaRow[d];
+            columnForRow[viaRow[d]] = stackColumn[d];
+          }
+          return true;
+        }
+      }
       let advanced = false;
       while (stackNext[depth] < candidates.length) {
         const r = candidates[stackNext[depth]++];

@@ -17,7 +17,18 @@ export interface SymbolicFactor {
   upperNeighbours: Int32Array[];
 }
 
-export function minimumDegreeOrder(size: number, edges: ReadonlyArray<readonly [number, number]>): SymbolicFactor {
+/**
+ * `early[v]` = 1 puts v in the first elimination class: the positions whose row was matched off its own diagonal
+ * (a branch row sitting on one of its nets' columns and that net's row on the branch column, see matching.ts).
+ * Their pivots are the ±1 incidence entries; eliminating them before any conductance row can modify them keeps
+ * those pivots exact (a chain of small conductances eliminated first could cancel one to zero). Within a class,
+ * minimum degree.
+ */
+export function minimumDegreeOrder(
+  size: number,
+  edges: ReadonlyArray<readonly [number, number]>,
+  early: Uint8Array = new Uint8Array(size),
+): SymbolicFactor {
   const adjacency: Set<number>[] = Array.from({ length: size }, () => new Set<number>());
   for (const [a, b] of edges) {
     if (a === b) continue;
@@ -33,7 +44,8 @@ export function minimumDegreeOrder(size: number, edges: ReadonlyArray<readonly [
     let bestDegree = Number.POSITIVE_INFINITY;
     for (let v = 0; v < size; v++) {
       if (eliminated[v]) continue;
-      const degree = adjacency[v].size;
+      // The late class ranks after every early vertex: offset its degree by more than any degree can be.
+      const degree = adjacency[v].size + (early[v] ? 0 : size + 1);
       if (degree < bestDegree) {
         bestDegree = degree;
         best = v;

@@ -3,7 +3,8 @@
  *
  * Pivoting choice (documented as the brief asks): STATIC pivoting. Rows are matched to columns so that every
  * pivot is a structural non-zero (matching.ts: branch rows of voltage sources take one of their nets' columns),
- * then a symmetric minimum-degree order reduces fill (ordering.ts). The pivot sequence never changes at run time,
+ * then a symmetric minimum-degree order reduces fill (ordering.ts), eliminating the off-diagonal-matched pairs
+ * first so their ±1 pivots are never modified by conductance rows. The pivot sequence never changes at run time,
  * so the fill pattern and every index array of the elimination are computed here, once. At run time the numeric
  * factorisation (sparse-lu.ts) checks each pivot against the size of its row; a pivot that is tiny relative to
  * its row means static pivoting is not safe for these numbers, and the caller re-solves that system with the dense
@@ -65,7 +66,9 @@ export function compileSparseStructure(pattern: PatternBuilder, kind: SystemKind
     columnForRow[rowForColumn[c]] = c;
   }
   const edges: Array<[number, number]> = rows.map((r, e) => [columnForRow[r], cols[e]]);
-  const symbolic = minimumDegreeOrder(size, edges);
+  const offDiagonal = new Uint8Array(size);
+  for (let c = 0; c < size; c++) offDiagonal[c] = rowForColumn[c] !== c ? 1 : 0;
+  const symbolic = minimumDegreeOrder(size, edges, offDiagonal);
   const { order, positionOf, upperNeighbours } = symbolic;
 
   // Lower part of permuted row p: every earlier step q whose upper neighbours contain p.
