@@ -190,7 +190,10 @@ describe("the file schema", () => {
     ["the wrong format", followerFile({ format: "other" })],
     ["the wrong version", followerFile({ version: 2 })],
     ["no parts", { ...followerFile(), parts: undefined }],
-    ["a net that is not a string", withParts(replacePart("RS", (p) => ({ ...p, pins: { a: "s", b: 0 } })))],
+    [
+      "a net that is not a string",
+      withParts(replacePart("RS", (p) => ({ ...p, pins: { a: "s", b: 0 as unknown as string } }))),
+    ],
   ])("reports %s as invalid_file", (_, file) => {
     expect(failure(file).code).toBe("invalid_file");
   });

@@ -1,0 +1,52 @@
+/**
+ * The headless run, apart from the solver it calls: elaborate → topology checks → simulate, then the sweep (the
+ * other analyses repeated for each value of one parameter, by elaborating again with that parameter overridden).
+ * `run.ts` binds it to the solver; tests can bind it to any function of the same type.
+ */
+import { elaborate } from "./circuit/elaborate";
+import { checkTopology } from "./circuit/topology";
+import type { ElaboratedCircuit } from "./circuit/types";
+import type { OutputDocument, SimulationResult, SweepPoint } from "./results";
+
+export type Simulate = (circuit: ElaboratedCircuit) => SimulationResult;
+
+export interface RunOptions {
+  variant?: string;
+}
+
+/** A copy of `value` with every non-finite number (NaN, ±Infinity) replaced by null, as the contract requires. */
+export function withFiniteNumbers<T>(value: T): T {
+  if (typeof value === "number") return (Number.isFinite(value) ? value : null) as T;
+  if (Array.isArray(value)) return value.map((item) => withFiniteNumbers(item)) as T;
+  if (ArrayBuffer.isView(value)) return withFiniteNumbers(Array.from(value as unknown as ArrayLike<number>)) as T;
+  if (value !== null && typeof value === "object") {
+    return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, withFiniteNumbers(v)])) as T;
+  }
+  return value;
+}
+
+function solve(simulate: Simulate, circuit: ElaboratedCircuit): SimulationResult {
+  checkTopology(circuit);
+  return simulate(circuit);
+}
+
+export function runWith(simulate: Simulate, file: unknown, options: RunOptions = {}): OutputDocument {
+  const circuit = elaborate(file, { variant: options.variant });
+  const { sweep, ...others } = circuit.analyses;
+  const result = solve(simulate, { ...circuit, analyses: others });
+  // key order as in the contract's document: op, ac, noise, figures, sweep
+  const document: OutputDocument = {
+    ...(result.op && { op: result.op }),
+    ...(result.ac && { ac: result.ac }),
+    ...(result.noise && { noise: result.noise }),
+    figures: result.figures,
+  };
+  if (sweep) {
+    document.sweep = sweep.values.map((value): SweepPoint => {
+      const swept = elaborate(file, { variant: options.variant, parameters: { [sweep.parameter]: value } });
+      const { sweep: _repeat, ...analyses } = swept.analyses;
+      return { value, figures: solve(simulate, { ...swept, analyses }).figures };
+    });
+  }
+  return withFiniteNumbers(document);
+}
