@@ -1,8 +1,10 @@
 import type { Metadata, Viewport } from "next";
+import { getServerSession } from "next-auth";
 import type { ReactNode } from "react";
 import { Providers } from "@/components/providers";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { SiteHeader } from "@/components/shell/site-header";
+import { authOptions } from "./_server/auth-options";
 import { displayFont, monoFont, textFont } from "./fonts";
 import "./globals.css";
 
@@ -14,7 +16,10 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#15181c" };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  // Reads the signed cookie only (no database), so the header's first paint knows whether someone is signed in.
+  const session = await getServerSession(authOptions);
+  const serverUser = session?.user ? { name: session.user.name, email: session.user.email } : null;
   return (
     <html lang="en" className={`${displayFont.variable} ${textFont.variable} ${monoFont.variable}`}>
       <body className="flex min-h-screen flex-col">
@@ -22,7 +27,7 @@ export default function RootLayout({ children }: { children: ReactNode }) {
           Skip to content
         </a>
         <Providers>
-          <SiteHeader />
+          <SiteHeader serverUser={serverUser} />
           <main id="main" className="flex-1">
             {children}
           </main>

@@ -11,6 +11,8 @@ export const launcherConfig = {
   /** Where that cluster keeps its files. */
   pgDataDir: process.env.BACKPLATE_PG_DATA ?? path.join(PROJECT_ROOT, ".data", "postgres"),
   database: process.env.BACKPLATE_PG_DATABASE ?? "backplate",
+  /** Port of the mail fake that `npm start` runs (the tests take a free port). */
+  smtpPort: Number(process.env.BACKPLATE_SMTP_PORT ?? 2526),
   /** Where the app listens. */
   host: process.env.HOST ?? "127.0.0.1",
   port: Number(process.env.PORT ?? 3000),

@@ -1,18 +1,23 @@
 /**
- * Starts what the app needs beside itself — PostgreSQL now; the mail and storage fakes join here as they arrive —
- * for `npm start` (a kept cluster under .data/) and for the tests (a throwaway cluster on a free port).
+ * Starts what the app needs beside itself — PostgreSQL and the mail fake (the storage fake joins here when it
+ * arrives) — for `npm start` (a kept cluster and mail folder under .data/) and for the tests (a throwaway cluster and
+ * mail folder on free ports).
  */
 import os from "node:os";
 import path from "node:path";
 import fs from "node:fs";
 import { applyMigrations } from "../../db/migrate";
-import { launcherConfig } from "./config";
+import { launcherConfig, PROJECT_ROOT } from "./config";
+import { type MailFake, startMailFake } from "./mail-fake";
 import { type Cluster, destroyCluster, freePort, startCluster } from "./postgres";
 
 export interface Services {
   databaseUrl: string;
   pgDataDir: string;
   pgPort: number;
+  /** Folder where the mail fake keeps what it receives (null when SMTP_URL names a real server). */
+  mailDir: string | null;
+  smtpPort: number | null;
   /** Environment variables the app needs to reach these services. */
   env: Record<string, string>;
   stop(): Promise<void>;
@@ -27,7 +32,14 @@ export async function startDevServices(log: (line: string) => void): Promise<Ser
   });
   await applyMigrations(cluster.url);
   log("Migrations applied");
-  return wrap(cluster, false);
+  // A real server named in SMTP_URL wins; the fake runs only when none is.
+  if (process.env.SMTP_URL) {
+    log(`Mail goes to SMTP_URL (${new URL(process.env.SMTP_URL).host}); no mail fake`);
+    return wrap(cluster, null, false);
+  }
+  const mail = await startMailFake({ port: launcherConfig.smtpPort, dir: path.join(PROJECT_ROOT, ".data", "mail") });
+  log(`Mail fake listening on 127.0.0.1:${mail.port}; captured mail at /dev/mail`);
+  return wrap(cluster, mail, false);
 }
 
 /** A fresh cluster in the system temp folder, removed by `stop()`. */
@@ -42,7 +54,8 @@ export async function startTestServices(log: (line: string) => void = () => {}):
     log,
   });
   await applyMigrations(cluster.url);
-  const services = wrap(cluster, true);
+  const mail = await startMailFake({ port: await freePort(), dir: path.join(dataDir, "mail") });
+  const services = wrap(cluster, mail, true);
   const stop = services.stop;
   services.stop = async () => {
     await stop();
@@ -51,13 +64,22 @@ export async function startTestServices(log: (line: string) => void = () => {}):
   return services;
 }
 
-function wrap(cluster: Cluster, throwaway: boolean): Services {
+/** Sender of Backplate's mail unless MAIL_FROM says otherwise. */
+export const DEFAULT_MAIL_FROM = "Backplate <bench@backplate.example>";
+
+function wrap(cluster: Cluster, mail: MailFake | null, throwaway: boolean): Services {
+  const mailEnv: Record<string, string> = mail
+    ? { SMTP_URL: `smtp://127.0.0.1:${mail.port}`, BACKPLATE_MAIL_FAKE_DIR: mail.dir }
+    : {};
   return {
     databaseUrl: cluster.url,
     pgDataDir: cluster.dataDir,
     pgPort: cluster.port,
-    env: { DATABASE_URL: cluster.url },
+    mailDir: mail?.dir ?? null,
+    smtpPort: mail?.port ?? null,
+    env: { DATABASE_URL: cluster.url, ...mailEnv, MAIL_FROM: process.env.MAIL_FROM ?? DEFAULT_MAIL_FROM },
     async stop() {
+      await mail?.stop();
       if (throwaway) destroyCluster(cluster.dataDir);
       else cluster.stop();
     },
