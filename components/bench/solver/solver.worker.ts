@@ -1,0 +1,18 @@
+/**
+ * The bench's solver, off the main thread so typing never waits for the engine. Imports only sim/ (through
+ * compute.ts) and comlink. The bench runs two of these: one for the live solve, one for long jobs (families,
+ * sweeps, spreads, explanations) that it cancels by terminating the worker.
+ */
+import * as Comlink from "comlink";
+import { explainFigures, solveFamily, solveLive } from "./compute";
+import type { ExplainRequest, FamilyRequest, LiveRequest, ProgressCallback } from "./protocol";
+
+const api = {
+  live: (request: LiveRequest) => solveLive(request),
+  family: (request: FamilyRequest, onProgress: ProgressCallback) => solveFamily(request, onProgress),
+  explain: (request: ExplainRequest, onProgress: ProgressCallback) => explainFigures(request, onProgress),
+};
+
+export type SolverApi = typeof api;
+
+Comlink.expose(api);
