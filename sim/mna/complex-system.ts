@@ -33,8 +33,7 @@ export class ComplexSystem {
 
   /** Factor A(ω) for angular frequency omega (rad/s). Throws SingularMatrixError when no pivot order works. */
   factorAt(omega: number): void {
-    this.lu.loadAtFrequency(this.conductance, this.reactance, omega);
-    if (this.lu.factor()) {
+    if (this.lu.factorAt(this.conductance, this.reactance, omega)) {
       this.useDense = false;
       return;
     }
@@ -48,8 +47,12 @@ export class ComplexSystem {
 
   /** Solve with the current factors. rhs arrays may be longer than size (ground scratch slot). */
   solve(rhsRe: ArrayLike<number>, rhsIm: ArrayLike<number>, solRe: Float64Array, solIm: Float64Array): void {
-    if (this.useDense) this.dense!.solve(rhsRe, rhsIm, solRe, solIm);
-    else this.lu.solve(rhsRe, rhsIm, solRe, solIm);
+    // The sparse path needs no finiteness check: every accepted pivot is non-zero and not small for its row.
+    if (!this.useDense) {
+      this.lu.solve(rhsRe, rhsIm, solRe, solIm);
+      return;
+    }
+    this.dense!.solve(rhsRe, rhsIm, solRe, solIm);
     const n = this.structure.size;
     if (!allFinite(solRe, n) || !allFinite(solIm, n)) throw new SingularMatrixError(0, "solution is not finite");
   }

@@ -1,8 +1,8 @@
 /**
  * Numeric sparse LU of a complex system (the AC matrix at one frequency) on a compiled structure, with real and
- * imaginary parts in separate typed arrays. `loadAtFrequency` builds G + jωC from two precomputed coefficient
- * arrays, so a frequency costs one pass over the positions, the elimination program and two triangular solves:
- * no allocation, no look-ups.
+ * imaginary parts in separate typed arrays. `factorAt` builds G + jωC from two precomputed coefficient arrays
+ * while it eliminates, so a frequency costs one pass over the positions plus the elimination program, and each
+ * right-hand side two triangular solves: no allocation, no look-ups.
  */
 import { STATIC_PIVOT_RELATIVE_TOLERANCE } from "./pivot-tolerance";
 import type { SparseStructure } from "./sparse-structure";
@@ -36,8 +36,13 @@ export class SparseLuComplex {
     }
   }
 
-  /** Factor in place. False when a static pivot is too small for its row (use the dense fallback). */
-  factor(): boolean {
+  /**
+   * Load A(ω) = conductance + j·omega·reactance and factor it in place, row by row. Row-wise elimination only
+   * writes the row being processed, so each row is loaded just before its turn: one pass over the positions
+   * does the load, the row scale for the pivot test and the elimination. False when a static pivot is too
+   * small for its row (use the dense fallback).
+   */
+  factorAt(conductance: Float64Array, reactance: Float64Array, omega: number): boolean {
     const s = this.structure;
     const re = this.re;
     const im = this.im;
@@ -48,21 +53,28 @@ export class SparseLuComplex {
     const tol2 = STATIC_PIVOT_RELATIVE_TOLERANCE * STATIC_PIVOT_RELATIVE_TOLERANCE;
     for (let i = 0; i < s.size; i++) {
       let rowMax2 = 0;
-      for (let k = rowStart[i]; k < rowStart[i + 1]; k++) {
-        const a = re[k] * re[k] + im[k] * im[k];
+      const end = rowStart[i + 1];
+      for (let k = rowStart[i]; k < end; k++) {
+        const r = conductance[k];
+        const x = omega * reactance[k];
+        re[k] = r;
+        im[k] = x;
+        const a = r * r + x * x;
         if (a > rowMax2) rowMax2 = a;
       }
-      for (let e = eliminationStart[i]; e < eliminationStart[i + 1]; e++) {
+      const lastElimination = eliminationStart[i + 1];
+      for (let e = eliminationStart[i]; e < lastElimination; e++) {
         const m = multiplierPosition[e];
         const p = pivotRow[e];
         const ar = re[m];
         const ai = im[m];
+        if (ar === 0 && ai === 0) continue;
         const lr = ar * invRe[p] - ai * invIm[p];
         const li = ar * invIm[p] + ai * invRe[p];
         re[m] = lr;
         im[m] = li;
-        if (lr === 0 && li === 0) continue;
-        for (let u = updateStart[e]; u < updateStart[e + 1]; u++) {
+        const lastUpdate = updateStart[e + 1];
+        for (let u = updateStart[e]; u < lastUpdate; u++) {
           const src = updateSource[u];
           const dst = updateTarget[u];
           const sr = re[src];

@@ -1,0 +1,165 @@
+/**
+ * `npm run bench`: AC sweeps (1,000 log-spaced points, 1 Hz – 100 kHz) of a 40-net RC ladder and of the demo
+ * microphone, and the demo's DC operating point — each timed in-process (median of repeated runs after warm-up)
+ * beside the same matrices solved by the dense typed-array LU and by mathjs `lusolve`. mathjs is too slow for
+ * 1,000 points per run: it is timed on MATHJS_POINTS points and scaled per point to the full sweep (stated in the
+ * output). `--json` prints { "cases": [...] } only.
+ */
+import { readFileSync } from "node:fs";
+import { lusolve } from "mathjs";
+import { runAc } from "../analyses/ac";
+import { compileCircuit } from "../analyses/compile";
+import { OperatingPointSolver } from "../analyses/op";
+import { SmallSignalModel } from "../analyses/small-signal";
+import { elaborate } from "../circuit/elaborate";
+import type { ElaboratedCircuit } from "../circuit/types";
+import { prepareDense, prepareMathjs } from "./baselines";
+import { rcLadder } from "./rc-ladder";
+import { medianMs } from "./timing";
+
+const SWEEP_POINTS = 1000;
+const MATHJS_POINTS = 20;
+const REPEATS = 101;
+const WARMUP = 10;
+const MATHJS_REPEATS = 5;
+const TARGET_LADDER_MS = 2;
+const TARGET_RATIO = 1000;
+const TARGET_DC_OP_MS = 0.5;
+
+interface BenchCase {
+  name: string;
+  nets: number;
+  points: number;
+  median_ms: number;
+  mathjs_median_ms: number;
+  ratio: number;
+  dense_median_ms: number;
+  mathjs_points_timed: number;
+  dense_fallbacks: number;
+}
+
+/** 1,000 log-spaced points from 1 Hz to 100 kHz, both ends included. */
+function sweepFrequencies(): number[] {
+  return Array.from({ length: SWEEP_POINTS }, (_, i) => 10 ** ((5 * i) / (SWEEP_POINTS - 1)));
+}
+
+function sweepCase(name: string, circuit: ElaboratedCircuit): BenchCase {
+  const compiled = compileCircuit(circuit);
+  const op = new OperatingPointSolver(compiled).solve();
+  const model = new SmallSignalModel(compiled, op);
+  const frequencies = sweepFrequencies();
+  const pressure = 1;
+  const sparse = medianMs(() => runAc(model, frequencies, pressure), { warmup: WARMUP, repeats: REPEATS });
+  const dense = medianMs(prepareDense(model, frequencies, pressure), { warmup: WARMUP, repeats: REPEATS });
+  const few = frequencies.filter((_, i) => i % (SWEEP_POINTS / MATHJS_POINTS) === 0);
+  const mathjsFew = medianMs(prepareMathjs(model, few, pressure), { warmup: 1, repeats: MATHJS_REPEATS });
+  const mathjs = (mathjsFew / few.length) * SWEEP_POINTS;
+  return {
+    name,
+    nets: circuit.nets.length - 1,
+    points: SWEEP_POINTS,
+    median_ms: sparse,
+    mathjs_median_ms: mathjs,
+    ratio: mathjs / sparse,
+    dense_median_ms: dense,
+    mathjs_points_timed: few.length,
+    dense_fallbacks: model.denseFallbacks,
+  };
+}
+
+function operatingPointCase(name: string, circuit: ElaboratedCircuit): BenchCase {
+  const compiled = compileCircuit(circuit);
+  const solver = new OperatingPointSolver(compiled);
+  const reference = solver.solve();
+  const cold = medianMs(() => solver.solve(), { warmup: 200, repeats: 501 });
+  // mathjs baseline: the same number of Newton linear solves on the final Jacobian.
+  const n = compiled.unknowns.length;
+  const values = new Float64Array(compiled.dc.nnz + 1);
+  const rhs = new Float64Array(n + 1);
+  const positions = compiled.dc.positionOfHandle;
+  for (const d of compiled.devices) {
+    d.startNewton(reference.x);
+    d.stampDc({
+      x: reference.x,
+      thermalVoltage: reference.thermalVoltage,
+      sourceScale: 1,
+      add: (h, v) => {
+        values[positions[h]] += v;
+      },
+      addRhs: (row, v) => {
+        if (row >= 0) rhs[row] += v;
+      },
+      markLimited: () => {},
+    });
+  }
+  const rows: number[][] = Array.from({ length: n }, () => new Array<number>(n).fill(0));
+  const { rowStart, columnOf, originalRowOf, originalColumnOf } = compiled.dc;
+  for (let p = 0; p < n; p++) {
+    for (let k = rowStart[p]; k < rowStart[p + 1]; k++) rows[originalRowOf[p]][originalColumnOf[columnOf[k]]] += values[k];
+  }
+  const solves = Math.max(1, reference.iterations);
+  const mathjs = medianMs(
+    () => {
+      for (let s = 0; s < solves; s++) lusolveReal(rows, rhs, n);
+    },
+    { warmup: 3, repeats: 21 },
+  );
+  return {
+    name,
+    nets: circuit.nets.length - 1,
+    points: 1,
+    median_ms: cold,
+    mathjs_median_ms: mathjs,
+    ratio: mathjs / cold,
+    dense_median_ms: Number.NaN,
+    mathjs_points_timed: solves,
+    dense_fallbacks: 0,
+  };
+}
+
+function lusolveReal(rows: number[][], rhs: Float64Array, n: number): void {
+  lusolve(
+    rows,
+    Array.from(rhs.subarray(0, n), (v) => [v]),
+  );
+}
+
+function demoCircuit(): ElaboratedCircuit {
+  const url = new URL("../examples/demo-microphone.json", import.meta.url);
+  return elaborate(JSON.parse(readFileSync(url, "utf8")));
+}
+
+function main(): void {
+  const demo = demoCircuit();
+  const cases = [
+    sweepCase("rc-ladder-40 ac sweep", rcLadder(40)),
+    sweepCase("demo-microphone ac sweep", demo),
+    operatingPointCase("demo-microphone dc operating point", demo),
+  ];
+  if (process.argv.includes("--json")) {
+    process.stdout.write(`${JSON.stringify({ cases }, (_k, v) => (typeof v === "number" && !Number.isFinite(v) ? null : v))}\n`);
+    return;
+  }
+  const pad = (s: string, w: number) => s.padEnd(w);
+  const fmt = (v: number) => (Number.isFinite(v) ? v.toPrecision(4) : "—");
+  console.log(
+    `${pad("case", 38)}${pad("nets", 6)}${pad("points", 8)}${pad("sparse ms", 12)}${pad("dense ms", 12)}${pad("mathjs ms", 12)}ratio`,
+  );
+  for (const c of cases) {
+    console.log(
+      `${pad(c.name, 38)}${pad(String(c.nets), 6)}${pad(String(c.points), 8)}${pad(fmt(c.median_ms), 12)}${pad(fmt(c.dense_median_ms), 12)}${pad(fmt(c.mathjs_median_ms), 12)}${fmt(c.ratio)}×`,
+    );
+  }
+  console.log(
+    `\nmathjs lusolve timed on ${MATHJS_POINTS} of the ${SWEEP_POINTS} points and scaled per point to ${SWEEP_POINTS}; the DC case's mathjs figure is that many linear solves of the final Jacobian (one per Newton iteration).`,
+  );
+  const ladder = cases[0];
+  const op = cases[2];
+  console.log(
+    `targets: 40-net sweep ${fmt(ladder.median_ms)} ms (< ${TARGET_LADDER_MS}: ${ladder.median_ms < TARGET_LADDER_MS ? "met" : "NOT met"}), ` +
+      `${fmt(ladder.ratio)}× mathjs (≥ ${TARGET_RATIO}: ${ladder.ratio >= TARGET_RATIO ? "met" : "NOT met"}), ` +
+      `demo DC op ${fmt(op.median_ms)} ms (< ${TARGET_DC_OP_MS}: ${op.median_ms < TARGET_DC_OP_MS ? "met" : "NOT met"})`,
+  );
+}
+
+main();
