@@ -2,8 +2,10 @@
  * Compile an elaborated circuit once: number the unknowns (nets, then each part's extra unknowns), create the
  * devices, declare every matrix position they write, and build the sparse structures of the DC and AC systems
  * (matching, ordering and fill: sim/mna/sparse-structure.ts). Everything a solve needs per iteration or per
- * frequency is typed arrays from here on. A compiled circuit is reused by every operating point (warm-started
- * Monte Carlo runs change part values in place through `updatePartValues`) and every frequency.
+ * frequency is typed arrays from here on. A compiled circuit is reused by every operating point and every
+ * frequency: devices read their values from their part's `values` at every stamp, so a Monte Carlo run may change
+ * those numbers in place and re-solve (warm-started) on the same structure. What is fixed at compile time is only
+ * structural: a load's resistance being finite, a BJT's rbb being non-zero, a cable's segment count.
  */
 import { type ElaboratedCircuit, GROUND } from "../circuit/types";
 import type { Device, UnknownKind } from "../devices/device";
