@@ -1,8 +1,6 @@
 import "server-only";
 import { MAX_CIRCUIT_BYTES } from "@/components/schemas/design";
-import { isSimError } from "@/sim/errors";
-import { elaborate } from "@/sim/circuit/elaborate";
-import { checkTopology } from "@/sim/circuit/topology";
+import { checkTopology, elaborate, isSimError } from "@/sim";
 import { AppError } from "./errors";
 
 /**

@@ -3,7 +3,24 @@ import { describe, expect, it } from "vitest";
 import demo from "@/sim/examples/demo-microphone.json";
 import { diffCircuits, diffRecords } from "./circuit-diff";
 
-const base = {
+interface TestPart {
+  id: string;
+  kind: string;
+  pins: Record<string, string>;
+  values: Record<string, string>;
+  tolerance?: Record<string, string>;
+  enabled?: boolean;
+}
+
+const base: {
+  format: string;
+  version: number;
+  title: string;
+  parameters: Record<string, string>;
+  parts: TestPart[];
+  output: { plus: string; minus: string };
+  variants: { name: string; parameters: Record<string, string> }[];
+} = {
   format: "backplate/circuit",
   version: 1,
   title: "Divider",
@@ -37,7 +54,7 @@ describe("diffCircuits", () => {
   });
 
   it("finds changed values as written, changed pins, tolerances and the on/off switch", () => {
-    const next = clone(base) as typeof base & { parts: Array<Record<string, unknown>> };
+    const next = clone(base);
     next.parts[0] = { ...next.parts[0], values: { resistance: "10k" } };
     next.parts[1] = { ...next.parts[1], pins: { a: "out", b: "gnd2" }, tolerance: {}, enabled: false };
     const diff = diffCircuits(base, next);
@@ -55,7 +72,7 @@ describe("diffCircuits", () => {
   });
 
   it("reports a part whose kind changed under the same id", () => {
-    const next = clone(base) as typeof base & { parts: Array<Record<string, unknown>> };
+    const next = clone(base);
     next.parts[2] = { ...next.parts[2], kind: "inductor", values: { inductance: "1m" } };
     const [change] = diffCircuits(base, next).partsChanged;
     expect(change).toMatchObject({ id: "C1", kind: "inductor", kindBefore: "capacitor" });
