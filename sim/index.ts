@@ -6,7 +6,7 @@
 export { simulate } from "./analyses/simulate";
 export { DEFAULT_AC_GRID, DEFAULT_AC_PRESSURE_PA, DEFAULT_NOISE_GRID } from "./circuit/analyses";
 export { type ElaborateOptions, elaborate } from "./circuit/elaborate";
-export { type FieldOptions, type FieldResult, parseFieldValue } from "./circuit/field";
+export { type FieldOptions, type FieldResult, parseFieldValue, partValuesSchema } from "./circuit/field";
 export { countFrequencies, expandFrequencies, logGrid } from "./circuit/frequencies";
 export { parseCircuitJson } from "./circuit/json";
 export { KIND_SPECS, type KindSpec, type ValueSpec } from "./circuit/kinds";

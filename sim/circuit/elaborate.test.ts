@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { isSimError, type SimError } from "../errors";
 import { elaborate } from "./elaborate";
-import { parseFieldValue } from "./field";
+import { parseFieldValue, partValuesSchema } from "./field";
 import { validateCircuitFile } from "./schema";
 import { followerFile, type TestPart, withParts } from "./test-files";
 
@@ -234,5 +234,15 @@ describe("parseFieldValue (for the part sheet's forms)", () => {
     expect(parseFieldValue("jfet", "pinch_off", "2", {}, { type: "p" })).toEqual({ ok: true, value: 2 });
     expect(parseFieldValue("jfet", "type", "p")).toEqual({ ok: true, value: "p" });
     expect(parseFieldValue("resistor", "colour", "red").ok).toBe(false);
+  });
+});
+
+describe("partValuesSchema (for react-hook-form)", () => {
+  it("reports each bad value on its own field", () => {
+    const schema = partValuesSchema("jfet", { IDSS: "4m" });
+    expect(schema.safeParse({ type: "n", idss: "IDSS", pinch_off: "-2" }).success).toBe(true);
+    const result = schema.safeParse({ type: "p", idss: "4 mV", pinch_off: "-2" });
+    expect(result.success).toBe(false);
+    expect(result.error?.issues.map((issue) => issue.path[0])).toEqual(["idss", "pinch_off"]);
   });
 });

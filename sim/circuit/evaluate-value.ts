@@ -17,7 +17,7 @@ export interface ValueLocation {
   label?: string;
 }
 
-function labelOf(where: ValueLocation): string {
+export function labelOf(where: ValueLocation): string {
   return where.label ?? (where.part ? `${where.part}.${where.field}` : where.field);
 }
 

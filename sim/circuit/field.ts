@@ -2,12 +2,14 @@
  * One field on its own, for the part sheet's forms: `parseFieldValue("resistor", "resistance", "4k7", params)`.
  * Same parsing, units and ranges as `elaborate`, with the message a person can act on instead of an exception.
  */
+import { z } from "zod";
 import { isSimError, type SimErrorCode } from "../errors";
 import { evaluateValue } from "./evaluate-value";
 import { isPartKind, KIND_SPECS } from "./kinds";
 import { evaluateParameters } from "./parameters";
 import { QUANTITIES } from "./quantities";
 import { checkRange, pinchOffSignProblem } from "./ranges";
+import { valueInputSchema } from "./schema";
 import type { PartKind } from "./types";
 
 export type FieldResult = { ok: true; value: number | string } | { ok: false; message: string; code: SimErrorCode };
@@ -64,4 +66,23 @@ export function parseFieldValue(
     if (isSimError(error)) return { ok: false, code: error.code, message: error.message };
     throw error;
   }
+}
+
+/**
+ * A zod schema for one part's `values` (for react-hook-form's zod resolver on the part sheet): each value is
+ * checked with `parseFieldValue`, and each problem is reported on its own field.
+ */
+export function partValuesSchema(
+  kind: PartKind,
+  parameters: Readonly<Record<string, number | string>> = {},
+  options: FieldOptions = {},
+) {
+  return z.record(z.string(), valueInputSchema).superRefine((values, ctx) => {
+    for (const [field, raw] of Object.entries(values)) {
+      const type = typeof values.type === "string" ? values.type : options.type;
+      const result = parseFieldValue(kind, field, raw, parameters, { ...options, type });
+      if (!result.ok)
+        ctx.addIssue({ code: "custom", path: [field], message: result.message, params: { simCode: result.code } });
+    }
+  });
 }

@@ -1,6 +1,6 @@
 /** Range checks for evaluated values, with messages that say what the field accepts. */
 import { SimError } from "../errors";
-import type { ValueLocation } from "./evaluate-value";
+import { labelOf, type ValueLocation } from "./evaluate-value";
 import type { NumericRange } from "./kinds";
 import type { Quantity } from "./quantities";
 
@@ -27,7 +27,7 @@ export function checkRange(
   where: ValueLocation,
   code: "out_of_range" | "invalid_analysis" = "out_of_range",
 ): void {
-  const label = where.label ?? (where.part ? `${where.part}.${where.field}` : where.field);
+  const label = labelOf(where);
   const fail = (why: string) =>
     new SimError(code, `${label}: ${shown(raw, value)} is out of range: ${why}`, {
       part: where.part,
