@@ -39,3 +39,9 @@ export type InvitationCreateInput = z.input<typeof invitationCreateSchema>;
 
 export const invitationRevokeSchema = z.object({ invitationId: uuidField("invitation") });
 export type InvitationRevokeInput = z.input<typeof invitationRevokeSchema>;
+
+/** Paging through the audit log: newest first, `before` an entry id from the previous page. */
+export const auditQuerySchema = z.object({
+  before: z.coerce.number({ error: "before must be an entry number." }).int().positive().optional(),
+  limit: z.coerce.number({ error: "limit must be a number." }).int().min(1).max(200, "limit is at most 200.").optional(),
+});
