@@ -21,7 +21,7 @@ export interface SymbolBox {
 
 const twoTerminal = (a: string, b: string): SymbolBox => ({
   width: 120,
-  height: 60,
+  height: 40,
   pins: { [a]: { side: "left", at: 0.5 }, [b]: { side: "right", at: 0.5 } },
 });
 
@@ -67,12 +67,12 @@ export const SYMBOL_BOXES: Record<PartKind, SymbolBox> = {
   bjt: {
     width: 100,
     height: 100,
-    pins: { b: { side: "left", at: 0.5 }, c: { side: "top", at: 0.6 }, e: { side: "bottom", at: 0.6 } },
+    pins: { b: { side: "left", at: 0.6 }, c: { side: "top", at: 0.6 }, e: { side: "bottom", at: 0.6 } },
   },
   triode: {
     width: 100,
     height: 120,
-    pins: { g: { side: "left", at: 0.6 }, a: { side: "top", at: 0.5 }, k: { side: "bottom", at: 0.4 } },
+    pins: { g: { side: "left", at: 0.5 }, a: { side: "top", at: 0.4 }, k: { side: "bottom", at: 0.6 } },
   },
   transformer: {
     width: 120,
@@ -86,8 +86,8 @@ export const SYMBOL_BOXES: Record<PartKind, SymbolBox> = {
   },
   cable: {
     width: 160,
-    height: 60,
-    pins: { a: { side: "left", at: 0.4 }, b: { side: "right", at: 0.4 }, ref: { side: "bottom", at: 0.5 } },
+    height: 40,
+    pins: { a: { side: "left", at: 0.5 }, b: { side: "right", at: 0.5 }, ref: { side: "bottom", at: 0.5 } },
   },
 };
 
@@ -113,4 +113,26 @@ const SIDES_CLOCKWISE: Side[] = ["top", "right", "bottom", "left"];
 export function rotatedSide(side: Side, rotation: number): Side {
   const steps = Math.round((((rotation % 360) + 360) % 360) / 90);
   return SIDES_CLOCKWISE[(SIDES_CLOCKWISE.indexOf(side) + steps) % 4];
+}
+
+/** The box's size after rotation. */
+export function rotatedSize(kind: PartKind, rotation: number): { width: number; height: number } {
+  const box = SYMBOL_BOXES[kind];
+  return rotation % 180 === 0 ? { width: box.width, height: box.height } : { width: box.height, height: box.width };
+}
+
+/** A pin's offset from the rotated box's top-left corner (the symbol turns clockwise about its centre). */
+export function rotatedPinOffset(kind: PartKind, pin: string, rotation: number): { x: number; y: number } {
+  const box = SYMBOL_BOXES[kind];
+  const { x, y } = pinOffset(kind, pin);
+  switch ((((rotation % 360) + 360) % 360) as 0 | 90 | 180 | 270) {
+    case 90:
+      return { x: box.height - y, y: x };
+    case 180:
+      return { x: box.width - x, y: box.height - y };
+    case 270:
+      return { x: y, y: box.width - x };
+    default:
+      return { x, y };
+  }
 }

@@ -1,0 +1,273 @@
+"use client";
+/**
+ * The bench's drawing surface (React Flow 12): parts, ground symbols, net labels and wires from the store; drag to
+ * move (snapped to the grid, one undo step per drag), drag pin to pin to wire, drop kinds from the tray, keyboard
+ * shortcuts (see shortcuts.ts, "?" lists them). The solver's error marks its part or net in caution.
+ */
+import "@xyflow/react/dist/style.css";
+import "./canvas.css";
+import {
+  Background,
+  BackgroundVariant,
+  type Connection,
+  ConnectionLineType,
+  ConnectionMode,
+  Controls,
+  type EdgeChange,
+  type NodeChange,
+  ReactFlow,
+  useReactFlow,
+} from "@xyflow/react";
+import { type DragEvent, type KeyboardEvent, useCallback, useMemo, useState } from "react";
+import type { SimErrorJson } from "@/sim/errors";
+import { PART_KINDS, type PartKind } from "@/sim/circuit/types";
+import { GRID } from "../document/layout";
+import { nextFreeId } from "../document/ids";
+import { netNames } from "../document/nets";
+import { useBench, useBenchStore } from "../store/bench-store-context";
+import type { Selection } from "../store/selection";
+import { CANVAS_ATTRIBUTE, canvasCentre, FOCUS_SHEET_EVENT, KIND_DRAG_TYPE } from "./canvas-centre";
+import { type BenchFlowNode, endpointOfHandle, itemOfNodeId, toFlowEdges, toFlowNodes } from "./flow-model";
+import { GroundNode } from "./ground-node";
+import { HelpOverlay } from "./help-overlay";
+import { LabelNode } from "./label-node";
+import { PartNode } from "./part-node";
+import { commandOfKey } from "./shortcuts";
+
+const NODE_TYPES = { part: PartNode, ground: GroundNode, netLabel: LabelNode };
+const FIT_OPTIONS = { padding: 0.2, maxZoom: 1.4 };
+
+function isTyping(target: EventTarget | null): boolean {
+  const element = target as HTMLElement | null;
+  return !!element && (element.isContentEditable || ["INPUT", "TEXTAREA", "SELECT"].includes(element.tagName));
+}
+
+export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
+  const store = useBenchStore();
+  const document = useBench((s) => s.document);
+  const selection = useBench((s) => s.selection);
+  const readOnly = useBench((s) => s.readOnly);
+  const flow = useReactFlow();
+  const [help, setHelp] = useState(false);
+
+  const nodes = useMemo(
+    () => toFlowNodes(document, selection, error, document.circuit.parameters),
+    [document, selection, error],
+  );
+  const edges = useMemo(() => toFlowEdges(document, selection, error), [document, selection, error]);
+
+  const applySelection = useCallback(
+    (changes: { id: string; selected: boolean; node: boolean }[]) => {
+      if (changes.length === 0) return;
+      const current = store.getState().selection;
+      const sets = {
+        parts: new Set(current.parts),
+        grounds: new Set(current.grounds),
+        labels: new Set(current.labels),
+        wires: new Set(current.wires),
+      };
+      for (const change of changes) {
+        let set: Set<string>;
+        let id = change.id;
+        if (change.node) {
+          const item = itemOfNodeId(change.id);
+          if (!item) continue;
+          id = item.id;
+          set = item.kind === "part" ? sets.parts : item.kind === "ground" ? sets.grounds : sets.labels;
+        } else set = sets.wires;
+        if (change.selected) set.add(id);
+        else set.delete(id);
+      }
+      const next: Selection = {
+        parts: [...sets.parts],
+        grounds: [...sets.grounds],
+        labels: [...sets.labels],
+        wires: [...sets.wires],
+      };
+      store.getState().select(next);
+    },
+    [store],
+  );
+
+  const onNodesChange = useCallback(
+    (changes: NodeChange<BenchFlowNode>[]) => {
+      const selects: { id: string; selected: boolean; node: boolean }[] = [];
+      for (const change of changes) {
+        if (change.type === "position" && change.position) {
+          const item = itemOfNodeId(change.id);
+          if (item) store.getState().movePart(item, change.position, { record: false });
+        } else if (change.type === "select") {
+          selects.push({ id: change.id, selected: change.selected, node: true });
+        }
+      }
+      applySelection(selects);
+    },
+    [store, applySelection],
+  );
+
+  const onEdgesChange = useCallback(
+    (changes: EdgeChange[]) => {
+      applySelection(
+        changes.flatMap((c) => (c.type === "select" ? [{ id: c.id, selected: c.selected, node: false }] : [])),
+      );
+    },
+    [applySelection],
+  );
+
+  const onConnect = useCallback(
+    (connection: Connection) => {
+      const from = endpointOfHandle(connection.source, connection.sourceHandle);
+      const to = endpointOfHandle(connection.target, connection.targetHandle);
+      if (from && to) store.getState().connect(from, to);
+    },
+    [store],
+  );
+
+  const addLabel = useCallback(
+    (at: { x: number; y: number }) => {
+      const name = nextFreeId("net", netNames(store.getState().document.circuit));
+      store.getState().addNetLabel(at, name);
+    },
+    [store],
+  );
+
+  const onDrop = useCallback(
+    (event: DragEvent) => {
+      const kind = event.dataTransfer.getData(KIND_DRAG_TYPE);
+      if (!kind) return;
+      event.preventDefault();
+      const at = flow.screenToFlowPosition({ x: event.clientX, y: event.clientY });
+      if (kind === "ground") store.getState().addGround(at);
+      else if (kind === "label") addLabel(at);
+      else if ((PART_KINDS as readonly string[]).includes(kind)) store.getState().addPart(kind as PartKind, at);
+    },
+    [flow, store, addLabel],
+  );
+
+  const onKeyDown = (event: KeyboardEvent) => {
+    if (isTyping(event.target)) return;
+    if (event.key === "Enter") {
+      const element = (event.target as HTMLElement).closest("[data-id]");
+      const item = element ? itemOfNodeId(element.getAttribute("data-id") ?? "") : null;
+      if (item?.kind === "part") {
+        event.preventDefault();
+        store.getState().select({ parts: [item.id] });
+        window.dispatchEvent(new CustomEvent(FOCUS_SHEET_EVENT));
+      }
+      return;
+    }
+    const command = commandOfKey(event);
+    if (!command) return;
+    const state = store.getState();
+    switch (command) {
+      case "help":
+        setHelp((open) => !open);
+        break;
+      case "escape":
+        setHelp(false);
+        state.clearSelection();
+        break;
+      case "fit":
+        flow.fitView(FIT_OPTIONS);
+        break;
+      case "rotate":
+        state.rotatePart();
+        break;
+      case "delete":
+        state.deleteSelection();
+        break;
+      case "copy":
+        state.copy();
+        break;
+      case "paste":
+        state.paste();
+        break;
+      case "undo":
+        state.undo();
+        break;
+      case "redo":
+        state.redo();
+        break;
+      case "ground":
+        state.addGround(canvasCentre(flow));
+        break;
+      case "label":
+        addLabel(canvasCentre(flow));
+        break;
+    }
+    event.preventDefault();
+  };
+
+  const netError = error && !error.part && error.net ? error : null;
+
+  return (
+    <section
+      className="bench-canvas relative h-full min-h-0 w-full bg-paper outline-none"
+      aria-label="Bench canvas"
+      {...{ [CANVAS_ATTRIBUTE]: "" }}
+      onKeyDown={onKeyDown}
+      onDragOver={(e) => {
+        if (e.dataTransfer.types.includes(KIND_DRAG_TYPE)) {
+          e.preventDefault();
+          e.dataTransfer.dropEffect = "copy";
+        }
+      }}
+      onDrop={onDrop}
+    >
+      <ReactFlow<BenchFlowNode>
+        nodes={nodes}
+        edges={edges}
+        nodeTypes={NODE_TYPES}
+        onNodesChange={onNodesChange}
+        onEdgesChange={onEdgesChange}
+        onConnect={onConnect}
+        onNodeDragStart={() => store.getState().checkpoint()}
+        onNodeDoubleClick={(_, node) => {
+          const item = itemOfNodeId(node.id);
+          if (item?.kind === "part") window.dispatchEvent(new CustomEvent(FOCUS_SHEET_EVENT));
+        }}
+        onPaneClick={() => store.getState().clearSelection()}
+        connectionMode={ConnectionMode.Loose}
+        connectionLineType={ConnectionLineType.SmoothStep}
+        snapToGrid
+        snapGrid={[GRID, GRID]}
+        nodesDraggable={!readOnly}
+        nodesConnectable={!readOnly}
+        elementsSelectable
+        deleteKeyCode={null}
+        selectionKeyCode="Shift"
+        multiSelectionKeyCode={["Shift", "Meta", "Control"]}
+        fitView
+        fitViewOptions={FIT_OPTIONS}
+        minZoom={0.2}
+        maxZoom={3}
+        proOptions={{ hideAttribution: true }}
+      >
+        <Background variant={BackgroundVariant.Dots} gap={GRID} size={1} color="var(--color-rule)" />
+        <Controls showInteractive={false} position="bottom-right" aria-label="Zoom" />
+      </ReactFlow>
+      {netError && (
+        <div
+          role="alert"
+          className="absolute left-3 right-3 top-3 z-10 rounded border border-caution bg-caution-bg px-3 py-2 text-sm text-caution"
+        >
+          <span className="font-mono">Net {netError.net}:</span> {netError.message}
+        </div>
+      )}
+      {document.circuit.parts.length === 0 && (
+        <p className="pointer-events-none absolute inset-x-0 top-1/3 text-center text-sm text-ink-soft">
+          {readOnly ? "This design has no parts yet." : "Drag a part from the tray, or click one to place it here."}
+        </p>
+      )}
+      <button
+        type="button"
+        onClick={() => setHelp(true)}
+        className="absolute left-3 bottom-3 z-10 rounded border border-rule bg-paper px-2 py-1 text-xs text-ink-soft hover:bg-paper-deep"
+        aria-label="Keyboard shortcuts"
+      >
+        ? Shortcuts
+      </button>
+      {help && <HelpOverlay onClose={() => setHelp(false)} />}
+    </section>
+  );
+}

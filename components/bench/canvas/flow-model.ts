@@ -1,0 +1,137 @@
+/**
+ * The bench document as React Flow sees it: one node per part, ground symbol and net label, one edge per wire.
+ * Node ids carry their type ("p:R1", "g:g1", "l:n1") so a handle maps back to a document endpoint.
+ */
+import type { Edge, Node } from "@xyflow/react";
+import type { SimErrorJson } from "@/sim/errors";
+import { GROUND } from "@/sim/circuit/types";
+import type { BenchPart, RawValue } from "../document/circuit";
+import type { BenchDocument } from "../document/document";
+import type { Endpoint, Placement } from "../document/layout";
+import type { ItemRef, Selection } from "../store/selection";
+import { keyValueText } from "../symbols/key-value";
+
+export const GROUND_HANDLE = "gnd";
+export const LABEL_HANDLE = "net";
+
+export interface PartNodeData extends Record<string, unknown> {
+  part: BenchPart;
+  placement: Placement;
+  keyText: string;
+  error: string | null;
+}
+export interface GroundNodeData extends Record<string, unknown> {
+  error: string | null;
+}
+export interface LabelNodeData extends Record<string, unknown> {
+  net: string;
+  error: string | null;
+}
+
+export type PartFlowNode = Node<PartNodeData, "part">;
+export type GroundFlowNode = Node<GroundNodeData, "ground">;
+export type LabelFlowNode = Node<LabelNodeData, "netLabel">;
+export type BenchFlowNode = PartFlowNode | GroundFlowNode | LabelFlowNode;
+
+export function nodeIdOf(item: ItemRef): string {
+  return `${item.kind === "part" ? "p" : item.kind === "ground" ? "g" : "l"}:${item.id}`;
+}
+
+export function itemOfNodeId(nodeId: string): ItemRef | null {
+  const id = nodeId.slice(2);
+  if (nodeId.startsWith("p:")) return { kind: "part", id };
+  if (nodeId.startsWith("g:")) return { kind: "ground", id };
+  if (nodeId.startsWith("l:")) return { kind: "label", id };
+  return null;
+}
+
+export function endpointOfHandle(nodeId: string, handleId: string | null | undefined): Endpoint | null {
+  const item = itemOfNodeId(nodeId);
+  if (!item) return null;
+  if (item.kind === "part") return handleId ? { kind: "pin", part: item.id, pin: handleId } : null;
+  return item.kind === "ground" ? { kind: "ground", id: item.id } : { kind: "label", id: item.id };
+}
+
+export function handleOfEndpoint(endpoint: Endpoint): { node: string; handle: string } {
+  if (endpoint.kind === "pin") return { node: `p:${endpoint.part}`, handle: endpoint.pin };
+  if (endpoint.kind === "ground") return { node: `g:${endpoint.id}`, handle: GROUND_HANDLE };
+  return { node: `l:${endpoint.id}`, handle: LABEL_HANDLE };
+}
+
+/** The net a wire belongs to, from the circuit's pins (for error highlighting and titles). */
+export function netOfEndpoint(document: BenchDocument, endpoint: Endpoint): string | undefined {
+  if (endpoint.kind === "ground") return GROUND;
+  if (endpoint.kind === "label") return document.layout.netLabels[endpoint.id]?.net;
+  return document.circuit.parts.find((p) => p.id === endpoint.part)?.pins[endpoint.pin];
+}
+
+export function toFlowNodes(
+  document: BenchDocument,
+  selection: Selection,
+  error: SimErrorJson | null,
+  parameters: Record<string, RawValue>,
+): BenchFlowNode[] {
+  const selectedParts = new Set(selection.parts);
+  const selectedGrounds = new Set(selection.grounds);
+  const selectedLabels = new Set(selection.labels);
+  const nodes: BenchFlowNode[] = [];
+  for (const part of document.circuit.parts) {
+    const placement = document.layout.parts[part.id] ?? { x: 0, y: 0, rotation: 0 };
+    nodes.push({
+      id: `p:${part.id}`,
+      type: "part",
+      position: { x: placement.x, y: placement.y },
+      selected: selectedParts.has(part.id),
+      ariaLabel: `${part.id}, ${part.kind}`,
+      data: {
+        part,
+        placement,
+        keyText: keyValueText(part, parameters),
+        error: error?.part === part.id ? error.message : null,
+      },
+    });
+  }
+  for (const [id, at] of Object.entries(document.layout.grounds)) {
+    nodes.push({
+      id: `g:${id}`,
+      type: "ground",
+      position: at,
+      selected: selectedGrounds.has(id),
+      ariaLabel: "ground",
+      data: { error: error?.net === GROUND ? error.message : null },
+    });
+  }
+  for (const [id, label] of Object.entries(document.layout.netLabels)) {
+    nodes.push({
+      id: `l:${id}`,
+      type: "netLabel",
+      position: { x: label.x, y: label.y },
+      selected: selectedLabels.has(id),
+      ariaLabel: `net label ${label.net}`,
+      data: { net: label.net, error: error?.net === label.net ? error.message : null },
+    });
+  }
+  return nodes;
+}
+
+export function toFlowEdges(document: BenchDocument, selection: Selection, error: SimErrorJson | null): Edge[] {
+  const selected = new Set(selection.wires);
+  return document.layout.wires.map((wire) => {
+    const from = handleOfEndpoint(wire.from);
+    const to = handleOfEndpoint(wire.to);
+    const net = netOfEndpoint(document, wire.from) ?? netOfEndpoint(document, wire.to);
+    const faulty = error?.net !== undefined && error.net === net;
+    return {
+      id: wire.id,
+      source: from.node,
+      sourceHandle: from.handle,
+      target: to.node,
+      targetHandle: to.handle,
+      type: "smoothstep",
+      selected: selected.has(wire.id),
+      className: faulty ? "bench-wire bench-wire-fault" : "bench-wire",
+      data: { net },
+      ariaLabel: net === undefined ? "wire" : `wire on net ${net}`,
+    };
+  });
+}
