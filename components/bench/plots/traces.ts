@@ -1,0 +1,159 @@
+/**
+ * Plot data for the bench, as plain Plotly trace objects built from results (pure, so it is tested without a
+ * browser): the Bode plot (magnitude in dB above, phase in degrees below, one log frequency axis), the noise
+ * density with each part's contribution, and |Zout(f)|. Units on the axes are the ones the figures use.
+ */
+import { OVERLAY_COLOURS, PLOT_COLOURS } from "./palette";
+
+export type CurveStyle = "live" | "pinned" | "overlay";
+
+export interface PlotCurve {
+  id: string;
+  label: string;
+  frequency: number[];
+  magnitude_db: number[];
+  phase_deg: number[];
+  style: CurveStyle;
+  colour?: string;
+}
+
+export interface Envelope {
+  frequency: number[];
+  p5_db: number[];
+  p95_db: number[];
+}
+
+const FONT = { family: "IBM Plex Sans, ui-sans-serif, sans-serif", size: 12, color: PLOT_COLOURS.inkSoft };
+
+function line(style: CurveStyle, colour: string) {
+  if (style === "live") return { color: colour, width: 2.5 };
+  if (style === "pinned") return { color: colour, width: 2, dash: "dash" };
+  return { color: colour, width: 1.5 };
+}
+
+const baseLayout = {
+  font: FONT,
+  paper_bgcolor: "rgba(0,0,0,0)",
+  plot_bgcolor: "#fbf9f3",
+  margin: { l: 56, r: 16, t: 12, b: 44 },
+  showlegend: true,
+  legend: { orientation: "h", y: -0.18, font: { size: 11 } },
+  hovermode: "x unified",
+  uirevision: "keep",
+};
+
+const logFrequencyAxis = {
+  type: "log",
+  title: { text: "Frequency (Hz)" },
+  gridcolor: PLOT_COLOURS.rule,
+  zeroline: false,
+  exponentformat: "SI",
+};
+
+export const BODE_LAYOUT = {
+  ...baseLayout,
+  xaxis: { ...logFrequencyAxis, anchor: "y2" },
+  yaxis: { title: { text: "Magnitude (dB)" }, domain: [0.4, 1], gridcolor: PLOT_COLOURS.rule, zeroline: false },
+  yaxis2: { title: { text: "Phase (°)" }, domain: [0, 0.3], gridcolor: PLOT_COLOURS.rule, zeroline: false, dtick: 90 },
+};
+
+export const NOISE_LAYOUT = {
+  ...baseLayout,
+  xaxis: logFrequencyAxis,
+  yaxis: { type: "log", title: { text: "Output noise (V/√Hz)" }, gridcolor: PLOT_COLOURS.rule, exponentformat: "SI" },
+};
+
+export const IMPEDANCE_LAYOUT = {
+  ...baseLayout,
+  showlegend: false,
+  xaxis: logFrequencyAxis,
+  yaxis: { type: "log", title: { text: "|Zout| (Ω)" }, gridcolor: PLOT_COLOURS.rule, exponentformat: "SI" },
+};
+
+export function bodeTraces(curves: PlotCurve[], envelope?: Envelope | null): unknown[] {
+  const traces: unknown[] = [];
+  if (envelope) {
+    // the spread band: 5th to 95th percentile, drawn first so curves sit on top
+    traces.push(
+      {
+        x: envelope.frequency,
+        y: envelope.p5_db,
+        mode: "lines",
+        line: { width: 0 },
+        hoverinfo: "skip",
+        showlegend: false,
+        name: "p5",
+      },
+      {
+        x: envelope.frequency,
+        y: envelope.p95_db,
+        mode: "lines",
+        fill: "tonexty",
+        fillcolor: "rgba(159, 209, 201, 0.45)",
+        line: { width: 0 },
+        name: "Spread (5–95 %)",
+      },
+    );
+  }
+  let overlayIndex = 0;
+  for (const c of curves) {
+    const colour =
+      c.colour ??
+      (c.style === "live"
+        ? PLOT_COLOURS.trace
+        : c.style === "pinned"
+          ? PLOT_COLOURS.pinned
+          : OVERLAY_COLOURS[overlayIndex++ % OVERLAY_COLOURS.length]);
+    const common = { x: c.frequency, mode: "lines", line: line(c.style, colour), legendgroup: c.id, name: c.label };
+    traces.push({ ...common, y: c.magnitude_db, hovertemplate: "%{y:.2f} dB" });
+    traces.push({ ...common, y: c.phase_deg, yaxis: "y2", showlegend: false, hovertemplate: "%{y:.1f}°" });
+  }
+  return traces;
+}
+
+export interface NoiseData {
+  frequency: number[];
+  output_density: number[];
+  contributions: Record<string, number[]>;
+}
+
+/** Parts contributing less than this fraction of the total power everywhere are left out (they only crowd the plot). */
+export const NOISE_CONTRIBUTION_SHOWN_FRACTION = 1e-4;
+
+export function noiseTraces(noise: NoiseData): unknown[] {
+  const traces: unknown[] = [
+    {
+      x: noise.frequency,
+      y: noise.output_density,
+      mode: "lines",
+      name: "Total",
+      line: { color: PLOT_COLOURS.trace, width: 2.5 },
+    },
+  ];
+  let i = 0;
+  for (const [part, density] of Object.entries(noise.contributions)) {
+    const matters = density.some((d, k) => d * d >= NOISE_CONTRIBUTION_SHOWN_FRACTION * noise.output_density[k] ** 2);
+    if (!matters) continue;
+    traces.push({
+      x: noise.frequency,
+      y: density,
+      mode: "lines",
+      name: part,
+      line: { color: OVERLAY_COLOURS[i++ % OVERLAY_COLOURS.length], width: 1.5 },
+    });
+  }
+  return traces;
+}
+
+export function impedanceTraces(frequency: number[], magnitudeOhm: number[]): unknown[] {
+  return [
+    {
+      x: frequency,
+      y: magnitudeOhm,
+      mode: "lines",
+      name: "|Zout|",
+      line: { color: PLOT_COLOURS.trace, width: 2.5 },
+      hovertemplate: "%{y:.4s} Ω",
+    },
+  ];
+}

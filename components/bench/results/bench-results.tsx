@@ -1,0 +1,259 @@
+"use client";
+/**
+ * The bench's live results, whole: figures, plots (with the overlay family, a pinned result and the spread band),
+ * the curves table, and tabs for the operating point, destinations and overlays, explanations and calculators.
+ * Mount it with the bench document; `onSelectPart` takes the canvas to a part named by an error, warning or
+ * explanation; `onApplyValues` writes a calculator's result into a part (absent or readOnly: no writing).
+ */
+import dynamic from "next/dynamic";
+import { useMemo, useState } from "react";
+import { CalculatorsPanel } from "../calculators/calculators-panel";
+import type { ApplyValues } from "../calculators/capsule-calculator";
+import type { DestinationChoice } from "../destinations/destination-picker";
+import { DestinationPicker } from "../destinations/destination-picker";
+import { DEFAULT_CABLE_LENGTH_M } from "../destinations/presets";
+import type { BenchDocument } from "../document";
+import { ExplainPanel } from "../explain/explain-panel";
+import { OverlayControls, type RevisionSource } from "../overlays/overlay-controls";
+import { type PinnedResult, pinCurve } from "../overlays/pinned";
+import { OVERLAY_COLOURS, PLOT_COLOURS } from "../plots/palette";
+import type { PlotCurve } from "../plots/traces";
+import { type OverlayChoice, useLiveSolve } from "../solver/use-live-solve";
+import { type CurveRow, CurvesTable } from "./curves-table";
+import { FiguresPanel } from "./figures-panel";
+import { OperatingPointPanel } from "./operating-point-panel";
+import { SolveErrorPanel } from "./solve-error-panel";
+
+// Plotly and the plots load only here, only in the browser.
+const PlotsPanel = dynamic(() => import("../plots/plots-panel"), {
+  ssr: false,
+  loading: () => <div className="h-[420px] animate-pulse rounded bg-paper-deep" role="status" aria-label="Loading plots" />,
+});
+
+type Tab = "op" | "overlays" | "explain" | "calculators";
+const TABS: { name: Tab; label: string }[] = [
+  { name: "op", label: "Operating point" },
+  { name: "overlays", label: "Destinations & overlays" },
+  { name: "explain", label: "Explain" },
+  { name: "calculators", label: "Calculators" },
+];
+
+export interface BenchResultsProps {
+  document: BenchDocument;
+  variant?: string;
+  onSelectPart?: (id: string) => void;
+  onApplyValues?: ApplyValues;
+  selected?: { id: string; kind: string } | null;
+  readOnly?: boolean;
+  /** where the other revisions of this design are listed (absent on a bench link) */
+  revisions?: RevisionSource;
+}
+
+const NO_OVERLAYS: OverlayChoice = { variants: [], revisions: [] };
+
+export function BenchResults({
+  document,
+  variant,
+  onSelectPart,
+  onApplyValues,
+  selected,
+  readOnly,
+  revisions,
+}: BenchResultsProps) {
+  const [tab, setTab] = useState<Tab>("op");
+  const [destinations, setDestinations] = useState<DestinationChoice>({
+    destinations: [],
+    cableLengthM: DEFAULT_CABLE_LENGTH_M,
+  });
+  const [overlays, setOverlays] = useState<OverlayChoice>(NO_OVERLAYS);
+  const [pinned, setPinned] = useState<PinnedResult | null>(null);
+  const live = useLiveSolve(document, {
+    variant,
+    destinations: destinations.destinations,
+    cableLengthM: destinations.cableLengthM,
+    overlays,
+  });
+  const { result, family } = live;
+  const doc = result?.document;
+
+  const liveCurve = useMemo((): PlotCurve | null => {
+    const ac = doc?.ac;
+    if (!ac) return null;
+    return {
+      id: "live",
+      label: variant ? `Design (${variant})` : "Design",
+      frequency: ac.frequency,
+      magnitude_db: ac.magnitude_db,
+      phase_deg: ac.phase_deg,
+      style: "live",
+    };
+  }, [doc, variant]);
+
+  const familyCurves = family.result?.curves ?? [];
+  const curves = useMemo(() => {
+    const list: PlotCurve[] = [];
+    if (liveCurve) list.push(liveCurve);
+    if (pinned) list.push(pinned.curve);
+    familyCurves.forEach((c, i) => {
+      if (!c.error)
+        list.push({
+          id: c.id,
+          label: c.label,
+          frequency: c.frequency,
+          magnitude_db: c.magnitude_db,
+          phase_deg: c.phase_deg,
+          style: "overlay",
+          colour: OVERLAY_COLOURS[i % OVERLAY_COLOURS.length],
+        });
+    });
+    return list;
+  }, [liveCurve, pinned, familyCurves]);
+
+  const rows: CurveRow[] = [
+    ...(doc
+      ? [{ id: "live", label: liveCurve?.label ?? "Design", colour: PLOT_COLOURS.trace, figures: doc.figures }]
+      : []),
+    ...(pinned
+      ? [
+          {
+            id: pinned.curve.id,
+            label: pinned.label,
+            colour: PLOT_COLOURS.pinned,
+            dashed: true,
+            figures: pinned.figures,
+          },
+        ]
+      : []),
+    ...familyCurves.map((c, i) => ({
+      id: c.id,
+      label: c.label,
+      colour: OVERLAY_COLOURS[i % OVERLAY_COLOURS.length],
+      figures: c.figures,
+      problem: c.error?.message,
+    })),
+  ];
+
+  const envelope = family.result?.spread?.envelope ?? null;
+  const spreadMissing = overlays.spread && family.status === "ready" && !family.result?.spread?.envelope;
+  const hasCapsule = document.circuit.parts.some((p) => p.kind === "capsule" && p.enabled);
+  const warnings = [...(doc?.op?.warnings ?? []), ...(doc?.ac?.warnings ?? []), ...(doc?.noise?.warnings ?? [])];
+
+  return (
+    <div
+      className="flex flex-col gap-4"
+      data-testid="bench-results"
+      data-status={live.status}
+      data-stale={live.stale ? "true" : "false"}
+    >
+      {live.error && <SolveErrorPanel error={live.error} onSelectPart={onSelectPart} />}
+      <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_minmax(0,2fr)]">
+        <div className="space-y-3">
+          <div className="flex items-center justify-between">
+            <h2 className="text-lg">Figures</h2>
+            {live.stale && (
+              <span className="rounded bg-brass-light px-1.5 py-0.5 text-xs text-ink" data-testid="stale-marker">
+                {live.status === "error" ? "Out of date" : "Solving…"}
+              </span>
+            )}
+          </div>
+          {doc ? (
+            <FiguresPanel
+              figures={doc.figures}
+              hasCapsule={hasCapsule}
+              noiseRan={doc.noise !== undefined}
+              stale={live.stale}
+            />
+          ) : (
+            <p className="text-sm text-ink-soft">
+              {live.status === "error" ? "Nothing has solved yet." : "Solving the design…"}
+            </p>
+          )}
+          {rows.length > 1 && <CurvesTable rows={rows} />}
+          {family.status === "running" && (
+            <div className="flex items-center gap-2 text-xs" data-testid="family-progress">
+              <progress
+                max={family.progress?.total ?? 1}
+                value={family.progress?.done ?? 0}
+                className="h-2 w-32"
+                aria-label="Overlay progress"
+              />
+              <span>Solving overlays…</span>
+              <button type="button" onClick={family.cancel} className="underline">
+                Cancel
+              </button>
+            </div>
+          )}
+          {family.status === "cancelled" && (
+            <p className="text-xs text-ink-soft">Overlays cancelled; change a choice to solve them again.</p>
+          )}
+          {spreadMissing && (
+            <p className="text-xs text-ink-soft">
+              The engine returned no spread band for this circuit yet, so none is drawn.
+            </p>
+          )}
+        </div>
+        {doc && result && (
+          <PlotsPanel
+            curves={curves}
+            envelope={envelope}
+            noise={doc.noise ?? null}
+            impedance={result.impedance}
+            generation={live.resultGeneration}
+            title={document.circuit.title}
+          />
+        )}
+      </div>
+      <div>
+        <div role="tablist" aria-label="Results" className="flex flex-wrap gap-1 border-b border-rule">
+          {TABS.map((t) => (
+            <button
+              key={t.name}
+              type="button"
+              role="tab"
+              aria-selected={tab === t.name}
+              onClick={() => setTab(t.name)}
+              className={`-mb-px border-b-2 px-3 py-1.5 text-sm ${tab === t.name ? "border-brass font-semibold text-ink" : "border-transparent text-ink-soft hover:text-ink"}`}
+            >
+              {t.label}
+            </button>
+          ))}
+        </div>
+        <div className="pt-3" role="tabpanel">
+          {tab === "op" &&
+            (doc?.op ? (
+              <OperatingPointPanel op={doc.op} warnings={warnings} onSelectPart={onSelectPart} />
+            ) : (
+              <p className="text-sm text-ink-soft">No operating point yet.</p>
+            ))}
+          {tab === "overlays" && (
+            <div className="grid gap-6 md:grid-cols-2">
+              <DestinationPicker value={destinations} onChange={setDestinations} />
+              <OverlayControls
+                variantNames={document.circuit.variants.map((v) => v.name)}
+                parameterNames={Object.keys(document.circuit.parameters)}
+                value={overlays}
+                onChange={setOverlays}
+                revisions={revisions}
+                canPin={liveCurve !== null && !live.stale}
+                pinnedLabel={pinned?.label ?? null}
+                onPin={() => liveCurve && doc && setPinned(pinCurve(liveCurve, doc.figures, new Date()))}
+                onClearPin={() => setPinned(null)}
+              />
+            </div>
+          )}
+          {tab === "explain" && (
+            <ExplainPanel
+              circuit={document.circuit}
+              variant={variant}
+              notes={document.layout.notes}
+              onSelectPart={onSelectPart}
+            />
+          )}
+          {tab === "calculators" && (
+            <CalculatorsPanel selected={selected} onApplyValues={onApplyValues} readOnly={readOnly} />
+          )}
+        </div>
+      </div>
+    </div>
+  );
+}
