@@ -27,7 +27,9 @@ import { SolveErrorPanel } from "./solve-error-panel";
 // Plotly and the plots load only here, only in the browser.
 const PlotsPanel = dynamic(() => import("../plots/plots-panel"), {
   ssr: false,
-  loading: () => <div className="h-[420px] animate-pulse rounded bg-paper-deep" role="status" aria-label="Loading plots" />,
+  loading: () => (
+    <div className="h-[420px] animate-pulse rounded bg-paper-deep" role="status" aria-label="Loading plots" />
+  ),
 });
 
 type Tab = "op" | "overlays" | "explain" | "calculators";
