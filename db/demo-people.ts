@@ -13,3 +13,6 @@ export const DEMO_PEOPLE = [
   { email: "margit@larkfield.example", name: "Margit Solberg", role: "reviewer" },
   { email: "felix@larkfield.example", name: "Felix Amberley", role: "viewer" },
 ] as const;
+
+/** Someone the demo owner has invited but who has not joined yet (the seed keeps one open invitation for them). */
+export const DEMO_PENDING_INVITATION = { email: "wendel@larkfield.example", role: "reviewer" } as const;
