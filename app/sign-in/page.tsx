@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { redirect } from "next/navigation";
-import { EmailLinkForm } from "@/components/account/email-link-form";
+import { EmailLinkSection } from "@/components/account/email-link-section";
 import { PasswordSignInForm } from "@/components/account/sign-in-form";
 import { safeCallbackPath, signInErrorMessage } from "@/components/account/sign-in-messages";
 import { Notice } from "@/components/ui/notice";
@@ -38,7 +38,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Searc
         <div className="border-t border-rule pt-6">
           <h2 className="text-lg font-bold">Or with a link by e-mail</h2>
           <p className="mb-4 mt-1 text-sm text-ink-soft">For an existing account: we mail you a link that signs you in once.</p>
-          <EmailLinkForm callbackUrl={callbackUrl} alreadySent={sent === "1"} />
+          <EmailLinkSection callbackUrl={callbackUrl} alreadySent={sent === "1"} />
         </div>
       </section>
     </div>

@@ -33,7 +33,7 @@ export function EmailLinkForm({ callbackUrl, alreadySent }: { callbackUrl?: stri
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Sign in with a link by e-mail">
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       {failure ? <Notice tone="error">{failure}</Notice> : null}
       {sentTo ? (
         <Notice tone="done">

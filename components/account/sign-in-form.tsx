@@ -31,7 +31,7 @@ export function PasswordSignInForm({ callbackUrl }: { callbackUrl?: string }) {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Sign in with a password">
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       {failure ? <Notice tone="error">{failure}</Notice> : null}
       <Field
         id="sign-in-email"

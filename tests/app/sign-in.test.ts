@@ -40,11 +40,11 @@ describe("password sign-in", () => {
     // Empty form: the schema's messages appear beside the fields and nothing is sent.
     await page.getByRole("button", { name: "Sign in", exact: true }).click();
     await page.getByText("Enter your e-mail address.").waitFor();
-    await page.getByLabel("E-mail").first().fill(owner.email);
-    await page.getByLabel("Password").fill("wrong-password-here");
+    await page.locator("#sign-in-email").fill(owner.email);
+    await page.locator("#sign-in-password").fill("wrong-password-here");
     await page.getByRole("button", { name: "Sign in", exact: true }).click();
     await page.getByText(/do not match an account/).waitFor();
-    await page.getByLabel("Password").fill(DEMO_PASSWORD);
+    await page.locator("#sign-in-password").fill(DEMO_PASSWORD);
     await page.getByRole("button", { name: "Sign in", exact: true }).click();
     await page.waitForURL(`${baseUrl}/w/${DEMO_WORKSPACE.slug}`);
     await expect(page.getByTestId("signed-in-name").textContent()).resolves.toBe(owner.name);
