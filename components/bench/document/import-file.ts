@@ -18,7 +18,12 @@ export function importCircuitText(text: string): ImportResult {
     const detail = error instanceof Error ? error.message : String(error);
     return {
       ok: false,
-      errors: [{ code: "malformed_json", message: `The file is not valid JSON (${detail}). Export it again or fix the syntax.` }],
+      errors: [
+        {
+          code: "malformed_json",
+          message: `The file is not valid JSON (${detail}). Export it again or fix the syntax.`,
+        },
+      ],
     };
   }
   const validation = validateCircuitFile(json);

@@ -81,7 +81,8 @@ function isEndpoint(value: unknown): value is Endpoint {
   return (v.kind === "ground" || v.kind === "label") && typeof v.id === "string";
 }
 
-const finite = (value: unknown, fallback = 0) => (typeof value === "number" && Number.isFinite(value) ? value : fallback);
+const finite = (value: unknown, fallback = 0) =>
+  typeof value === "number" && Number.isFinite(value) ? value : fallback;
 
 /**
  * Reads a stored layout, dropping whatever is malformed (a layout is a drawing; a damaged one must never stop the

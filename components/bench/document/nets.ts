@@ -104,7 +104,8 @@ function mostCommon(names: string[], exclude: Set<string>): string | undefined {
 export function syncNets(circuit: BenchCircuit, layout: BenchLayout): { circuit: BenchCircuit; layout: BenchLayout } {
   const groups = handleGroups(circuit, layout);
   const oldNet = new Map<string, string>();
-  for (const part of circuit.parts) for (const [pin, net] of Object.entries(part.pins)) oldNet.set(`${part.id}.${pin}`, net);
+  for (const part of circuit.parts)
+    for (const [pin, net] of Object.entries(part.pins)) oldNet.set(`${part.id}.${pin}`, net);
 
   const names: (string | undefined)[] = groups.map(() => undefined);
   const taken = new Set<string>([GROUND]);
@@ -136,7 +137,9 @@ export function syncNets(circuit: BenchCircuit, layout: BenchLayout): { circuit:
   groups.forEach((group, i) => {
     if (names[i] !== undefined) return;
     const first = group.pins[0];
-    const name = first ? pinNetName(first.part, first.pin, taken) : pinNetName("label", group.labels[0] ?? "net", taken);
+    const name = first
+      ? pinNetName(first.part, first.pin, taken)
+      : pinNetName("label", group.labels[0] ?? "net", taken);
     names[i] = name;
     taken.add(name);
   });

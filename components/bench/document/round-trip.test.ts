@@ -78,7 +78,10 @@ describe("nets from the drawing", () => {
     const withLabel = {
       ...layout,
       netLabels: { n1: { x: 0, y: 0, net: "gate_node" } },
-      wires: [...layout.wires, { id: "wl", from: { kind: "pin" as const, part: "J1", pin: "g" }, to: { kind: "label" as const, id: "n1" } }],
+      wires: [
+        ...layout.wires,
+        { id: "wl", from: { kind: "pin" as const, part: "J1", pin: "g" }, to: { kind: "label" as const, id: "n1" } },
+      ],
     };
     const result = syncNets(circuit, withLabel).circuit;
     expect(result.parts.find((p) => p.id === "J1")?.pins.g).toBe("gate_node");
@@ -100,10 +103,14 @@ describe("nets from the drawing", () => {
   });
 
   it("a part with no wires has each pin on a net of its own", () => {
-    const groups = handleGroups(
-      normaliseCircuit({ ...load("bench-rc-divider.json") }),
-      { version: 1, parts: {}, grounds: {}, netLabels: {}, wires: [], notes: [] },
-    );
+    const groups = handleGroups(normaliseCircuit({ ...load("bench-rc-divider.json") }), {
+      version: 1,
+      parts: {},
+      grounds: {},
+      netLabels: {},
+      wires: [],
+      notes: [],
+    });
     expect(groups.every((g) => g.pins.length === 1)).toBe(true);
   });
 });

@@ -31,7 +31,12 @@ export const EXTERNALLY_POLARISED_JFET = file(
   [
     { id: "V1", kind: "vsource", role: "supply", pins: { p: "pol", n: "0" }, values: { dc: "VPOL" } },
     { id: "R1", kind: "resistor", pins: { a: "pol", b: "dia" }, values: { resistance: "RB" } },
-    { id: "MIC1", kind: "capsule", pins: { diaphragm: "dia", backplate: "0" }, values: { capacitance: "50p", strain_per_pa: "3e-4" } },
+    {
+      id: "MIC1",
+      kind: "capsule",
+      pins: { diaphragm: "dia", backplate: "0" },
+      values: { capacitance: "50p", strain_per_pa: "3e-4" },
+    },
     { id: "C1", kind: "capacitor", pins: { a: "dia", b: "g" }, values: { capacitance: "1n" } },
     { id: "R2", kind: "resistor", pins: { a: "g", b: "0" }, values: { resistance: "RB" } },
     { id: "J1", kind: "jfet", pins: { d: "vdd", g: "g", s: "s" }, values: { type: "n", idss: "4m", pinch_off: "-2" } },
@@ -42,19 +47,20 @@ export const EXTERNALLY_POLARISED_JFET = file(
   ],
 );
 
-export const ELECTRET_JFET = file(
-  "Electret capsule with a JFET",
-  { VDD: "5" },
-  [
-    { id: "MIC1", kind: "capsule", pins: { diaphragm: "g", backplate: "0" }, values: { capacitance: "10p", strain_per_pa: "1e-4", electret_voltage: "150" } },
-    { id: "R1", kind: "resistor", pins: { a: "g", b: "0" }, values: { resistance: "1G" } },
-    { id: "J1", kind: "jfet", pins: { d: "d", g: "g", s: "0" }, values: { type: "n", idss: "500u", pinch_off: "-0.6" } },
-    { id: "R2", kind: "resistor", pins: { a: "vdd", b: "d" }, values: { resistance: "2k2" } },
-    { id: "V1", kind: "vsource", role: "supply", pins: { p: "vdd", n: "0" }, values: { dc: "VDD" } },
-    { id: "C1", kind: "capacitor", pins: { a: "d", b: "out" }, values: { capacitance: "10u" } },
-    { id: "IN1", kind: "load", pins: { p: "out", n: "0" }, values: { resistance: "10k" } },
-  ],
-);
+export const ELECTRET_JFET = file("Electret capsule with a JFET", { VDD: "5" }, [
+  {
+    id: "MIC1",
+    kind: "capsule",
+    pins: { diaphragm: "g", backplate: "0" },
+    values: { capacitance: "10p", strain_per_pa: "1e-4", electret_voltage: "150" },
+  },
+  { id: "R1", kind: "resistor", pins: { a: "g", b: "0" }, values: { resistance: "1G" } },
+  { id: "J1", kind: "jfet", pins: { d: "d", g: "g", s: "0" }, values: { type: "n", idss: "500u", pinch_off: "-0.6" } },
+  { id: "R2", kind: "resistor", pins: { a: "vdd", b: "d" }, values: { resistance: "2k2" } },
+  { id: "V1", kind: "vsource", role: "supply", pins: { p: "vdd", n: "0" }, values: { dc: "VDD" } },
+  { id: "C1", kind: "capacitor", pins: { a: "d", b: "out" }, values: { capacitance: "10u" } },
+  { id: "IN1", kind: "load", pins: { p: "out", n: "0" }, values: { resistance: "10k" } },
+]);
 
 export const VALVE_TRANSFORMER = file(
   "Valve impedance converter with an output transformer",
@@ -62,7 +68,12 @@ export const VALVE_TRANSFORMER = file(
   [
     { id: "V1", kind: "vsource", role: "supply", pins: { p: "pol", n: "0" }, values: { dc: "VPOL" } },
     { id: "R1", kind: "resistor", pins: { a: "pol", b: "dia" }, values: { resistance: "1G" } },
-    { id: "MIC1", kind: "capsule", pins: { diaphragm: "dia", backplate: "0" }, values: { capacitance: "50p", strain_per_pa: "3e-4" } },
+    {
+      id: "MIC1",
+      kind: "capsule",
+      pins: { diaphragm: "dia", backplate: "0" },
+      values: { capacitance: "50p", strain_per_pa: "3e-4" },
+    },
     { id: "C1", kind: "capacitor", pins: { a: "dia", b: "g" }, values: { capacitance: "470p" } },
     { id: "R2", kind: "resistor", pins: { a: "g", b: "0" }, values: { resistance: "250M" } },
     { id: "VT1", kind: "triode", pins: { a: "a", g: "g", k: "k" }, values: { mu: "30", k: "0.3m" } },
@@ -70,47 +81,54 @@ export const VALVE_TRANSFORMER = file(
     { id: "R4", kind: "resistor", pins: { a: "ht", b: "a" }, values: { resistance: "47k" } },
     { id: "V2", kind: "vsource", role: "supply", pins: { p: "ht", n: "0" }, values: { dc: "HT" } },
     { id: "C2", kind: "capacitor", pins: { a: "a", b: "pri" }, values: { capacitance: "1u" } },
-    { id: "T1", kind: "transformer", pins: { p1: "pri", p2: "0", s1: "out", s2: "0" }, values: { ratio: "0.1", primary_inductance: "60", primary_resistance: "800" } },
+    {
+      id: "T1",
+      kind: "transformer",
+      pins: { p1: "pri", p2: "0", s1: "out", s2: "0" },
+      values: { ratio: "0.1", primary_inductance: "60", primary_resistance: "800" },
+    },
     { id: "IN1", kind: "load", pins: { p: "out", n: "0" }, values: { resistance: "1k2" } },
   ],
 );
 
-export const VALVE_BIPOLAR = file(
-  "Valve with a bipolar follower",
-  { VPOL: "60", HT: "120" },
-  [
-    { id: "V1", kind: "vsource", role: "supply", pins: { p: "pol", n: "0" }, values: { dc: "VPOL" } },
-    { id: "R1", kind: "resistor", pins: { a: "pol", b: "dia" }, values: { resistance: "1G" } },
-    { id: "MIC1", kind: "capsule", pins: { diaphragm: "dia", backplate: "0" }, values: { capacitance: "50p", strain_per_pa: "1e-4" } },
-    { id: "C1", kind: "capacitor", pins: { a: "dia", b: "g" }, values: { capacitance: "470p" } },
-    { id: "R2", kind: "resistor", pins: { a: "g", b: "0" }, values: { resistance: "250M" } },
-    { id: "VT1", kind: "triode", pins: { a: "a", g: "g", k: "k" }, values: { mu: "30", k: "0.3m" } },
-    { id: "R3", kind: "resistor", pins: { a: "k", b: "0" }, values: { resistance: "1k5" } },
-    { id: "R4", kind: "resistor", pins: { a: "ht", b: "a" }, values: { resistance: "47k" } },
-    { id: "V2", kind: "vsource", role: "supply", pins: { p: "ht", n: "0" }, values: { dc: "HT" } },
-    { id: "Q1", kind: "bjt", pins: { c: "ht", b: "a", e: "e" }, values: { type: "npn", beta: "150" } },
-    { id: "R5", kind: "resistor", pins: { a: "e", b: "0" }, values: { resistance: "22k" } },
-    { id: "C2", kind: "capacitor", pins: { a: "e", b: "out" }, values: { capacitance: "10u" } },
-    { id: "IN1", kind: "load", pins: { p: "out", n: "0" }, values: { resistance: "1k2" } },
-  ],
-);
+export const VALVE_BIPOLAR = file("Valve with a bipolar follower", { VPOL: "60", HT: "120" }, [
+  { id: "V1", kind: "vsource", role: "supply", pins: { p: "pol", n: "0" }, values: { dc: "VPOL" } },
+  { id: "R1", kind: "resistor", pins: { a: "pol", b: "dia" }, values: { resistance: "1G" } },
+  {
+    id: "MIC1",
+    kind: "capsule",
+    pins: { diaphragm: "dia", backplate: "0" },
+    values: { capacitance: "50p", strain_per_pa: "1e-4" },
+  },
+  { id: "C1", kind: "capacitor", pins: { a: "dia", b: "g" }, values: { capacitance: "470p" } },
+  { id: "R2", kind: "resistor", pins: { a: "g", b: "0" }, values: { resistance: "250M" } },
+  { id: "VT1", kind: "triode", pins: { a: "a", g: "g", k: "k" }, values: { mu: "30", k: "0.3m" } },
+  { id: "R3", kind: "resistor", pins: { a: "k", b: "0" }, values: { resistance: "1k5" } },
+  { id: "R4", kind: "resistor", pins: { a: "ht", b: "a" }, values: { resistance: "47k" } },
+  { id: "V2", kind: "vsource", role: "supply", pins: { p: "ht", n: "0" }, values: { dc: "HT" } },
+  { id: "Q1", kind: "bjt", pins: { c: "ht", b: "a", e: "e" }, values: { type: "npn", beta: "150" } },
+  { id: "R5", kind: "resistor", pins: { a: "e", b: "0" }, values: { resistance: "22k" } },
+  { id: "C2", kind: "capacitor", pins: { a: "e", b: "out" }, values: { capacitance: "10u" } },
+  { id: "IN1", kind: "load", pins: { p: "out", n: "0" }, values: { resistance: "1k2" } },
+]);
 
-export const PHANTOM_JFET = file(
-  "Phantom-powered JFET stage",
-  { PHANTOM: "48", RB: "1G" },
-  [
-    { id: "V1", kind: "vsource", role: "supply", pins: { p: "ph", n: "0" }, values: { dc: "PHANTOM" } },
-    { id: "R1", kind: "resistor", pins: { a: "ph", b: "line" }, values: { resistance: "3k4" } },
-    { id: "R2", kind: "resistor", pins: { a: "line", b: "vdd" }, values: { resistance: "4k7" } },
-    { id: "C1", kind: "capacitor", pins: { a: "vdd", b: "0" }, values: { capacitance: "47u" } },
-    { id: "R3", kind: "resistor", pins: { a: "vdd", b: "dia" }, values: { resistance: "RB" } },
-    { id: "MIC1", kind: "capsule", pins: { diaphragm: "dia", backplate: "0" }, values: { capacitance: "40p", strain_per_pa: "3e-4" } },
-    { id: "C2", kind: "capacitor", pins: { a: "dia", b: "g" }, values: { capacitance: "1n" } },
-    { id: "R4", kind: "resistor", pins: { a: "g", b: "0" }, values: { resistance: "RB" } },
-    { id: "J1", kind: "jfet", pins: { d: "d", g: "g", s: "s" }, values: { type: "n", idss: "3m", pinch_off: "-1.5" } },
-    { id: "R5", kind: "resistor", pins: { a: "vdd", b: "d" }, values: { resistance: "6k8" } },
-    { id: "R6", kind: "resistor", pins: { a: "s", b: "0" }, values: { resistance: "1k" } },
-    { id: "C3", kind: "capacitor", pins: { a: "d", b: "out" }, values: { capacitance: "10u" } },
-    { id: "IN1", kind: "load", pins: { p: "out", n: "0" }, values: { resistance: "2k" } },
-  ],
-);
+export const PHANTOM_JFET = file("Phantom-powered JFET stage", { PHANTOM: "48", RB: "1G" }, [
+  { id: "V1", kind: "vsource", role: "supply", pins: { p: "ph", n: "0" }, values: { dc: "PHANTOM" } },
+  { id: "R1", kind: "resistor", pins: { a: "ph", b: "line" }, values: { resistance: "3k4" } },
+  { id: "R2", kind: "resistor", pins: { a: "line", b: "vdd" }, values: { resistance: "4k7" } },
+  { id: "C1", kind: "capacitor", pins: { a: "vdd", b: "0" }, values: { capacitance: "47u" } },
+  { id: "R3", kind: "resistor", pins: { a: "vdd", b: "dia" }, values: { resistance: "RB" } },
+  {
+    id: "MIC1",
+    kind: "capsule",
+    pins: { diaphragm: "dia", backplate: "0" },
+    values: { capacitance: "40p", strain_per_pa: "3e-4" },
+  },
+  { id: "C2", kind: "capacitor", pins: { a: "dia", b: "g" }, values: { capacitance: "1n" } },
+  { id: "R4", kind: "resistor", pins: { a: "g", b: "0" }, values: { resistance: "RB" } },
+  { id: "J1", kind: "jfet", pins: { d: "d", g: "g", s: "s" }, values: { type: "n", idss: "3m", pinch_off: "-1.5" } },
+  { id: "R5", kind: "resistor", pins: { a: "vdd", b: "d" }, values: { resistance: "6k8" } },
+  { id: "R6", kind: "resistor", pins: { a: "s", b: "0" }, values: { resistance: "1k" } },
+  { id: "C3", kind: "capacitor", pins: { a: "d", b: "out" }, values: { capacitance: "10u" } },
+  { id: "IN1", kind: "load", pins: { p: "out", n: "0" }, values: { resistance: "2k" } },
+]);

@@ -163,3 +163,14 @@ describe("bench store", () => {
     expect(canonicalPartition(store.getState().document.circuit)).toEqual({ ground: ["R1.b"], others: [["R1.a"]] });
   });
 });
+
+describe("replacing the document", () => {
+  it("is one undoable step", () => {
+    const { store } = drawDivider();
+    const before = store.getState().document;
+    store.getState().replaceDocument(empty());
+    expect(store.getState().document.circuit.parts).toEqual([]);
+    store.getState().undo();
+    expect(store.getState().document).toBe(before);
+  });
+});

@@ -25,6 +25,8 @@ export interface BenchState {
   clipboard: Clip | null;
 
   loadDocument(document: BenchDocument, options?: { dirty?: boolean }): void;
+  /** replaces the whole document as one undoable step (an import, a starting point) */
+  replaceDocument(document: BenchDocument): void;
   /** after a save: the current document is the saved one */
   markSaved(): void;
   setReadOnly(readOnly: boolean): void;
@@ -61,7 +63,10 @@ export type BenchStore = StoreApi<BenchState>;
 
 const READ_ONLY_MESSAGE = "This bench is read-only.";
 
-export function createBenchStore(initial: BenchDocument, options: { readOnly?: boolean; limit?: number } = {}): BenchStore {
+export function createBenchStore(
+  initial: BenchDocument,
+  options: { readOnly?: boolean; limit?: number } = {},
+): BenchStore {
   const limit = options.limit ?? HISTORY_LIMIT;
   return createStore<BenchState>()((set, get) => {
     /** Applies an edit as one undoable step; an edit that returns the same document records nothing. */
@@ -100,6 +105,9 @@ export function createBenchStore(initial: BenchDocument, options: { readOnly?: b
           dirty: opts.dirty ?? false,
           variant: variant !== null && variants.has(variant) ? variant : null,
         });
+      },
+      replaceDocument(document) {
+        apply(() => document, { selection: EMPTY_SELECTION });
       },
       markSaved() {
         set({ dirty: false });

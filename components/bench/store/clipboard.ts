@@ -35,7 +35,9 @@ export function copySelection(document: BenchDocument, selection: Selection): Cl
   return {
     parts,
     placements: Object.fromEntries(parts.map((p) => [p.id, document.layout.parts[p.id]])),
-    grounds: Object.fromEntries([...grounds].filter((g) => document.layout.grounds[g]).map((g) => [g, document.layout.grounds[g]])),
+    grounds: Object.fromEntries(
+      [...grounds].filter((g) => document.layout.grounds[g]).map((g) => [g, document.layout.grounds[g]]),
+    ),
     wires: document.layout.wires.filter((w) => inside(w.from) && inside(w.to)),
   };
 }
@@ -55,7 +57,11 @@ export function pasteClip(document: BenchDocument, clip: Clip): { document: Benc
     usedGrounds.push(id);
     groundIds.set(g, id);
   }
-  const moved = <T extends { x: number; y: number }>(at: T): T => ({ ...at, x: at.x + PASTE_OFFSET, y: at.y + PASTE_OFFSET });
+  const moved = <T extends { x: number; y: number }>(at: T): T => ({
+    ...at,
+    x: at.x + PASTE_OFFSET,
+    y: at.y + PASTE_OFFSET,
+  });
   const mapEnd = (e: Endpoint): Endpoint =>
     e.kind === "pin"
       ? { ...e, part: partIds.get(e.part) as string }
@@ -64,7 +70,14 @@ export function pasteClip(document: BenchDocument, clip: Clip): { document: Benc
         : e;
   const wires = [...document.layout.wires];
   for (const w of clip.wires) {
-    wires.push({ id: nextFreeId("w", wires.map((x) => x.id)), from: mapEnd(w.from), to: mapEnd(w.to) });
+    wires.push({
+      id: nextFreeId(
+        "w",
+        wires.map((x) => x.id),
+      ),
+      from: mapEnd(w.from),
+      to: mapEnd(w.to),
+    });
   }
   const parts = clip.parts.map((p) => {
     const id = partIds.get(p.id) as string;
@@ -77,7 +90,12 @@ export function pasteClip(document: BenchDocument, clip: Clip): { document: Benc
       ...document.layout,
       parts: {
         ...document.layout.parts,
-        ...Object.fromEntries(clip.parts.map((p) => [partIds.get(p.id) as string, moved(clip.placements[p.id] ?? { x: 0, y: 0, rotation: 0 })])),
+        ...Object.fromEntries(
+          clip.parts.map((p) => [
+            partIds.get(p.id) as string,
+            moved(clip.placements[p.id] ?? { x: 0, y: 0, rotation: 0 }),
+          ]),
+        ),
       },
       grounds: {
         ...document.layout.grounds,

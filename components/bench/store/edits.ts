@@ -21,15 +21,24 @@ function synced(document: BenchDocument): BenchDocument {
 }
 
 function nextWireId(wires: Wire[]): string {
-  return nextFreeId("w", wires.map((w) => w.id));
+  return nextFreeId(
+    "w",
+    wires.map((w) => w.id),
+  );
 }
 
 export function addPart(document: BenchDocument, kind: PartKind, at: { x: number; y: number }) {
-  const id = nextDesignator(kind, document.circuit.parts.map((p) => p.id));
+  const id = nextDesignator(
+    kind,
+    document.circuit.parts.map((p) => p.id),
+  );
   const part = newPart(kind, id);
   const next: BenchDocument = {
     circuit: { ...document.circuit, parts: [...document.circuit.parts, part] },
-    layout: { ...document.layout, parts: { ...document.layout.parts, [id]: { x: snap(at.x), y: snap(at.y), rotation: 0 } } },
+    layout: {
+      ...document.layout,
+      parts: { ...document.layout.parts, [id]: { x: snap(at.x), y: snap(at.y), rotation: 0 } },
+    },
   };
   return { document: synced(next), id };
 }
@@ -37,7 +46,10 @@ export function addPart(document: BenchDocument, kind: PartKind, at: { x: number
 export function addGround(document: BenchDocument, at: { x: number; y: number }) {
   const id = nextFreeId("g", Object.keys(document.layout.grounds));
   return {
-    document: { ...document, layout: { ...document.layout, grounds: { ...document.layout.grounds, [id]: { x: snap(at.x), y: snap(at.y) } } } },
+    document: {
+      ...document,
+      layout: { ...document.layout, grounds: { ...document.layout.grounds, [id]: { x: snap(at.x), y: snap(at.y) } } },
+    },
     id,
   };
 }
@@ -73,7 +85,7 @@ export function rotateParts(document: BenchDocument, ids: string[]): BenchDocume
   const parts: Record<string, Placement> = { ...document.layout.parts };
   for (const id of ids) {
     const old = parts[id];
-    if (old) parts[id] = { ...old, rotation: (((old.rotation + 90) % 360) as Rotation) };
+    if (old) parts[id] = { ...old, rotation: ((old.rotation + 90) % 360) as Rotation };
   }
   return { ...document, layout: { ...document.layout, parts } };
 }
@@ -135,7 +147,10 @@ export function connect(document: BenchDocument, from: Endpoint, to: Endpoint): 
 
 export function disconnect(document: BenchDocument, wireIds: string[]): BenchDocument {
   const ids = new Set(wireIds);
-  return synced({ ...document, layout: { ...document.layout, wires: document.layout.wires.filter((w) => !ids.has(w.id)) } });
+  return synced({
+    ...document,
+    layout: { ...document.layout, wires: document.layout.wires.filter((w) => !ids.has(w.id)) },
+  });
 }
 
 function mapPart(document: BenchDocument, id: string, change: (part: BenchPart) => BenchPart): BenchDocument {
@@ -190,7 +205,11 @@ export function renamePart(document: BenchDocument, from: string, to: string): E
       circuit: {
         ...document.circuit,
         parts: document.circuit.parts.map((p) => (p.id === from ? { ...p, id: name } : p)),
-        variants: document.circuit.variants.map((v) => ({ ...v, disable: v.disable.map(rename), enable: v.enable.map(rename) })),
+        variants: document.circuit.variants.map((v) => ({
+          ...v,
+          disable: v.disable.map(rename),
+          enable: v.enable.map(rename),
+        })),
       },
       layout: {
         ...document.layout,
@@ -223,7 +242,8 @@ export function setNetName(document: BenchDocument, net: string, name: string): 
   if (wanted === net) return { ok: true, document };
   if (net === GROUND) return { ok: false, error: 'Ground is always net "0"; it cannot be renamed.' };
   if (wanted === "") return { ok: false, error: "Give the net a name, such as out or gate." };
-  if (wanted === GROUND) return { ok: false, error: 'To join a net to ground, wire it to a ground symbol; "0" is ground.' };
+  if (wanted === GROUND)
+    return { ok: false, error: 'To join a net to ground, wire it to a ground symbol; "0" is ground.' };
   const used = document.circuit.parts.some((p) => Object.values(p.pins).includes(wanted));
   if (used) return { ok: false, error: `Another net is already called ${wanted}. Choose a name no other net has.` };
   const rename = (n: string) => (n === net ? wanted : n);

@@ -9,9 +9,7 @@ export interface Selection {
 export const EMPTY_SELECTION: Selection = { parts: [], grounds: [], labels: [], wires: [] };
 
 export function isEmptySelection(selection: Selection): boolean {
-  return (
-    selection.parts.length + selection.grounds.length + selection.labels.length + selection.wires.length === 0
-  );
+  return selection.parts.length + selection.grounds.length + selection.labels.length + selection.wires.length === 0;
 }
 
 /** A canvas item that can be moved. */
