@@ -66,6 +66,8 @@ export interface SimulationResult {
   ac?: AcResult;
   noise?: NoiseResult;
   figures: Figures;
+  /** Monte Carlo over the tolerances, when `analyses.spread` asks for it */
+  spread?: SpreadResult;
 }
 
 export interface SweepPoint {
@@ -84,9 +86,13 @@ export interface FigureStatistics {
 }
 
 export interface SpreadResult {
+  /** runs asked for */
   runs: number;
+  /** runs whose operating point or small-signal solve failed (left out of the statistics); absent when none */
+  failed_runs?: number;
   figures: Record<string, FigureStatistics>;
   envelope?: { frequency: number[]; min_db: number[]; max_db: number[]; p5_db: number[]; p95_db: number[] };
+  warnings?: SimWarning[];
 }
 
 export interface TargetCheck {

@@ -44,9 +44,11 @@ export function runWith(simulate: Simulate, file: unknown, options: RunOptions =
   if (sweep) {
     document.sweep = sweep.values.map((value): SweepPoint => {
       const swept = elaborate(file, { variant: options.variant, parameters: { [sweep.parameter]: value } });
-      const { sweep: _repeat, ...analyses } = swept.analyses;
+      // a sweep point repeats the primary analyses only, not the Monte Carlo spread
+      const { sweep: _repeat, spread: _spread, ...analyses } = swept.analyses;
       return { value, figures: solve(simulate, { ...swept, analyses }).figures };
     });
   }
+  if (result.spread) document.spread = result.spread;
   return withFiniteNumbers(document);
 }

@@ -1,40 +1,82 @@
 /**
- * Run what an elaborated circuit asks for: `op` and `ac` when requested, and the figures always (they need only
- * the operating point and a few small-signal solves). The operating point an analysis linearises at is solved
- * at that analysis's temperature.
+ * Run what an elaborated circuit asks for: `op`, `ac` and `noise` when requested, the figures always (they need
+ * only the operating point and a few small-signal solves; self_noise_dba_spl needs the noise analysis too), and a
+ * Monte Carlo `spread` over the tolerances (spread.ts) that repeats the same analyses per run on the same compiled
+ * structure. The operating point an analysis linearises at is solved at that analysis's temperature.
  */
-import { DEFAULT_TEMPERATURE_K, type ElaboratedCircuit } from "../circuit/types";
+import { DEFAULT_TEMPERATURE_K, type AnalysisRequests, type ElaboratedCircuit } from "../circuit/types";
 import type { SimulationResult } from "../results";
 import { runAc } from "./ac";
-import { compileCircuit } from "./compile";
+import { type CompiledCircuit, compileCircuit } from "./compile";
 import { computeFigures } from "./figures";
 import { expandFrequencies } from "./frequency-grid";
+import { runNoise } from "./noise";
+import { AdjointNoiseSystem } from "./noise-adjoint";
+import { selfNoiseDbaSpl } from "./noise-figures";
 import { type OperatingPoint, OperatingPointSolver, reportOperatingPoint } from "./op";
 import { SmallSignalModel } from "./small-signal";
+import { runSpread } from "./spread";
 
 /** Contract: capsules are driven at 1 Pa unless the ac analysis says otherwise. */
 export const DEFAULT_PRESSURE_PA = 1;
 
-export function simulate(circuit: ElaboratedCircuit): SimulationResult {
-  const compiled = compileCircuit(circuit);
-  const solver = new OperatingPointSolver(compiled);
+export interface SolveOptions {
+  /** produce the `op` document when op is requested (Monte Carlo runs skip it) */
+  reportOp: boolean;
+  /** start every operating point from this solution (a Monte Carlo run starts from the nominal one) */
+  warmStart?: Float64Array;
+}
+
+/** One pass of the requested analyses on a compiled circuit with the values its parts hold now. */
+export function solveAnalyses(
+  compiled: CompiledCircuit,
+  solver: OperatingPointSolver,
+  analyses: AnalysisRequests,
+  options: SolveOptions,
+): { result: SimulationResult; nominal: OperatingPoint } {
   const points = new Map<number, OperatingPoint>();
   const operatingPointAt = (temperature: number): OperatingPoint => {
     let op = points.get(temperature);
     if (!op) {
-      const warm = points.values().next().value;
-      op = solver.solve({ temperature, initial: warm?.x });
+      const warm = options.warmStart ?? points.values().next().value?.x;
+      op = solver.solve({ temperature, initial: warm });
       points.set(temperature, op);
     }
     return op;
   };
-  const { analyses } = circuit;
   const result: SimulationResult = { figures: {} };
-  if (analyses.op) result.op = reportOperatingPoint(compiled, operatingPointAt(analyses.op.temperature));
+  if (analyses.op && options.reportOp) {
+    result.op = reportOperatingPoint(compiled, operatingPointAt(analyses.op.temperature));
+  }
   const acTemperature = analyses.ac?.temperature ?? analyses.op?.temperature ?? DEFAULT_TEMPERATURE_K;
-  const model = new SmallSignalModel(compiled, operatingPointAt(acTemperature));
+  const nominal = operatingPointAt(acTemperature);
+  const model = new SmallSignalModel(compiled, nominal);
   const pressure = analyses.ac?.pressure ?? DEFAULT_PRESSURE_PA;
   if (analyses.ac) result.ac = runAc(model, expandFrequencies(analyses.ac.frequencies), pressure);
   result.figures = computeFigures(model, pressure);
+  if (analyses.noise) {
+    const adjoint = new AdjointNoiseSystem(compiled, operatingPointAt(analyses.noise.temperature));
+    result.noise = runNoise(adjoint, expandFrequencies(analyses.noise.frequencies));
+    result.figures.self_noise_dba_spl = selfNoiseDbaSpl(
+      result.noise.rms_a_weighted,
+      result.figures.sensitivity_v_per_pa,
+    );
+  }
+  return { result, nominal };
+}
+
+export function simulate(circuit: ElaboratedCircuit): SimulationResult {
+  const compiled = compileCircuit(circuit);
+  const solver = new OperatingPointSolver(compiled);
+  const { spread, ...analyses } = circuit.analyses;
+  const { result, nominal } = solveAnalyses(compiled, solver, analyses, { reportOp: true });
+  if (spread) {
+    result.spread = runSpread(
+      compiled,
+      spread,
+      (warmStart) => solveAnalyses(compiled, solver, analyses, { reportOp: false, warmStart }).result,
+      nominal.x,
+    );
+  }
   return result;
 }
