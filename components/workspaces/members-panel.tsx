@@ -77,7 +77,8 @@ export function MembersPanel({ workspaceId, myUserId, myRole }: { workspaceId: s
               const self = member.userId === myUserId;
               return (
                 <li key={member.userId} className="flex flex-wrap items-center gap-x-4 gap-y-2 px-4 py-3" data-testid="member-row">
-                  <div className="min-w-0 flex-1">
+                  {/* On a phone the name takes the whole first line and the controls wrap below it. */}
+                  <div className="min-w-0 basis-full sm:flex-1 sm:basis-auto">
                     <p className="truncate font-medium">
                       {member.name ?? member.email}
                       {self ? <span className="ml-2 text-xs text-ink-soft">(you)</span> : null}

@@ -119,6 +119,8 @@ describe("accounts in Chromium: sign-up, password, mail link, members", () => {
   });
 
   it("shows the sign-in page on a phone without sideways scrolling", async () => {
+    // Signed out: the first test left this browser signed in, and /sign-in sends signed-in people on.
+    await browser.context.clearCookies();
     const page = await browser.context.newPage();
     await page.setViewportSize({ width: 390, height: 844 });
     await page.goto(`${baseUrl}/sign-in`);

@@ -1,6 +1,9 @@
 /** New people for app tests, made through the real API (sign-up, then next-auth's password sign-in). */
 import { randomUUID } from "node:crypto";
+import { linkIn } from "../integration/captured-mail-helpers";
 import { type HttpSession, signInWithPassword } from "./http-session";
+
+export { linkIn };
 
 export const NEW_PASSWORD = "a-long-enough-password";
 
@@ -32,10 +35,7 @@ interface Captured {
   text: string;
 }
 
-/**
- * The newest captured mail to `to` from /api/dev/mail. The link is read with quoted-printable soft line breaks (=\n)
- * and =3D undone, in case a body is ever stored undecoded.
- */
+/** The newest captured mail to `to` from /api/dev/mail (the running app's view of the mail fake's folder). */
 export async function mailTo(baseUrl: string, to: string, subject?: RegExp, timeoutMs = 5_000): Promise<Captured> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
@@ -45,13 +45,6 @@ export async function mailTo(baseUrl: string, to: string, subject?: RegExp, time
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
   throw new Error(`no mail to ${to}`);
-}
-
-export function linkIn(text: string, pathPart: string): string {
-  const plain = text.replace(/=\r?\n/g, "").replace(/=3D/g, "=");
-  const match = new RegExp(`https?://\\S*${pathPart.replace(/\//g, "\\/")}\\S*`).exec(plain);
-  if (!match) throw new Error(`no ${pathPart} link in:\n${plain}`);
-  return match[0];
 }
 
 /** Owner invites `person` with `role`; the person accepts through the API with the mailed token. */

@@ -22,8 +22,8 @@ export const PATCH = route(async (request: Request, context: WorkspaceContext) =
 /** An owner removes a member, or anyone leaves (their own id); the last owner can do neither. */
 export const DELETE = route(async (request: Request, context: WorkspaceContext) => {
   const workspaceId = await workspaceIdFrom(context);
-  const input = await readJson(request, memberRemoveSchema);
   const { user } = await requireAction(workspaceId, "members.read");
+  const input = await readJson(request, memberRemoveSchema);
   if (input.userId !== user.id) await requireAction(workspaceId, "members.manage");
   await removeMember(workspaceId, user.id, input.userId);
   return new Response(null, { status: 204 });
