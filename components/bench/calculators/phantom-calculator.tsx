@@ -49,9 +49,7 @@ export function PhantomCalculator() {
       )}
       {fit?.ok && (
         <div className="text-xs" data-testid="phantom-result">
-          <p className={fit.value.fits ? "text-trace" : "text-caution"}>
-            {fit.value.fits ? "Fits" : "Does not fit"}: {fit.value.message}
-          </p>
+          <p className={fit.value.fits ? "text-trace" : "text-caution"}>{fit.value.message}</p>
           <p className="font-mono">Worst-case voltage at the microphone {formatSi(fit.value.worstCaseVoltageV, "V")}</p>
         </div>
       )}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { resultsCsv } from "./results-csv";
-import { bodeTraces, noiseTraces } from "./traces";
+import { bodeTraces, noiseTraces, unwrapDegrees } from "./traces";
 
 describe("results CSV", () => {
   it("writes a header and one row per frequency; other grids fill where frequencies coincide (RFC 4180 quoting)", () => {
@@ -38,5 +38,13 @@ describe("plot traces", () => {
       contributions: { R1: [9.9e-9, 9.9e-9], C1: [1e-11, 1e-11] },
     }) as { name: string }[];
     expect(traces.map((t) => t.name)).toEqual(["Total", "R1"]);
+  });
+});
+
+describe("phase unwrapping", () => {
+  it("removes ±360° wraps of the principal value, keeping the first point", () => {
+    expect(unwrapDegrees([170, 179, -179, -170])).toEqual([170, 179, 181, 190]);
+    expect(unwrapDegrees([-170, -179, 179, 170])).toEqual([-170, -179, -181, -190]);
+    expect(unwrapDegrees([0, -45, -90])).toEqual([0, -45, -90]);
   });
 });

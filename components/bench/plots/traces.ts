@@ -70,6 +70,25 @@ export const IMPEDANCE_LAYOUT = {
   yaxis: { type: "log", title: { text: "|Zout| (Ω)" }, gridcolor: PLOT_COLOURS.rule, exponentformat: "SI" },
 };
 
+/**
+ * Phase made continuous for plotting: a step of more than 180° between neighbouring points is taken as a wrap of
+ * the ±180° principal value and removed (an inverting stage then reads as a steady −180°-ish line, not a jump).
+ * The first point keeps its principal value.
+ */
+export function unwrapDegrees(phase: readonly number[]): number[] {
+  const out: number[] = [];
+  let offset = 0;
+  phase.forEach((p, i) => {
+    if (i > 0) {
+      const step = p + offset - out[i - 1];
+      if (step > 180) offset -= 360 * Math.round(step / 360);
+      else if (step < -180) offset += 360 * Math.round(-step / 360);
+    }
+    out.push(p + offset);
+  });
+  return out;
+}
+
 export function bodeTraces(curves: PlotCurve[], envelope?: Envelope | null): unknown[] {
   const traces: unknown[] = [];
   if (envelope) {
@@ -106,7 +125,13 @@ export function bodeTraces(curves: PlotCurve[], envelope?: Envelope | null): unk
           : OVERLAY_COLOURS[overlayIndex++ % OVERLAY_COLOURS.length]);
     const common = { x: c.frequency, mode: "lines", line: line(c.style, colour), legendgroup: c.id, name: c.label };
     traces.push({ ...common, y: c.magnitude_db, hovertemplate: "%{y:.2f} dB" });
-    traces.push({ ...common, y: c.phase_deg, yaxis: "y2", showlegend: false, hovertemplate: "%{y:.1f}°" });
+    traces.push({
+      ...common,
+      y: unwrapDegrees(c.phase_deg),
+      yaxis: "y2",
+      showlegend: false,
+      hovertemplate: "%{y:.1f}°",
+    });
   }
   return traces;
 }

@@ -199,7 +199,7 @@ export function BenchResults({
             curves={curves}
             envelope={envelope}
             noise={doc.noise ?? null}
-            impedance={result.impedance}
+            impedance={live.impedance}
             generation={live.resultGeneration}
             title={document.circuit.title}
           />

@@ -92,7 +92,11 @@ export function FiguresPanel({
     >
       <dl className="grid grid-cols-1 gap-x-6 gap-y-2 sm:grid-cols-2">
         {rows.map((row) => (
-          <div key={row.key} className="flex flex-col border-b border-rule pb-1.5" data-figure={row.key}>
+          <div
+            key={row.key}
+            className={`flex flex-col border-b border-rule pb-1.5 ${row.key === "sensitivity" ? "sm:col-span-2" : ""}`}
+            data-figure={row.key}
+          >
             <dt className="text-xs uppercase tracking-wide text-ink-soft">{row.label}</dt>
             <dd className="font-mono text-sm text-ink" data-testid={`figure-${row.key}`}>
               {row.value}

@@ -16,6 +16,7 @@ import type {
   ExplainResult,
   FamilyRequest,
   FamilyResult,
+  ImpedanceResult,
   LiveRequest,
   LiveResult,
   Outcome,
@@ -54,12 +55,11 @@ function forBench(circuit: unknown): unknown {
 }
 
 export function solveLive(request: LiveRequest): Outcome<LiveResult> {
-  return attempt(() => {
-    const file = forBench(request.circuit);
-    const document = runCircuit(file, { variant: request.variant });
-    const impedance = outputImpedanceSweep(file, document.ac?.frequency ?? [], { variant: request.variant });
-    return { document, impedance };
-  });
+  return attempt(() => ({ document: runCircuit(forBench(request.circuit), { variant: request.variant }) }));
+}
+
+export function solveImpedance(request: LiveRequest, frequencies: number[]): Outcome<ImpedanceResult> {
+  return attempt(() => outputImpedanceSweep(forBench(request.circuit), frequencies, { variant: request.variant }));
 }
 
 function curveOf(id: string, label: string, group: Curve["group"], run: () => OutputDocument): Curve {

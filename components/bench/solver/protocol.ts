@@ -19,9 +19,10 @@ export interface LiveRequest {
 
 export interface LiveResult {
   document: OutputDocument;
-  /** |Zout(f)| on the AC grid (or the default grid when the file asks for no AC) */
-  impedance: OutputImpedanceSweep;
 }
+
+/** |Zout(f)| on the live result's AC grid: asked for after the live result, so it never delays the Bode plot. */
+export type ImpedanceResult = OutputImpedanceSweep;
 
 export type Outcome<T> = { ok: true; value: T } | { ok: false; error: BenchSolveError };
 

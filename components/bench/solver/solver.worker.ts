@@ -4,11 +4,12 @@
  * sweeps, spreads, explanations) that it cancels by terminating the worker.
  */
 import * as Comlink from "comlink";
-import { explainFigures, solveFamily, solveLive } from "./compute";
+import { explainFigures, solveFamily, solveImpedance, solveLive } from "./compute";
 import type { ExplainRequest, FamilyRequest, LiveRequest, ProgressCallback } from "./protocol";
 
 const api = {
   live: (request: LiveRequest) => solveLive(request),
+  impedance: (request: LiveRequest, frequencies: number[]) => solveImpedance(request, frequencies),
   family: (request: FamilyRequest, onProgress: ProgressCallback) => solveFamily(request, onProgress),
   explain: (request: ExplainRequest, onProgress: ProgressCallback) => explainFigures(request, onProgress),
 };

@@ -10,7 +10,14 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import type { BenchDocument } from "../document";
 import type { Destination } from "../destinations/presets";
 import { type SolverHandle, startSolver } from "./client";
-import type { BenchSolveError, FamilyRequest, FamilyResult, LiveResult, RevisionOverlay } from "./protocol";
+import type {
+  BenchSolveError,
+  FamilyRequest,
+  FamilyResult,
+  ImpedanceResult,
+  LiveResult,
+  RevisionOverlay,
+} from "./protocol";
 import { noteChange } from "./update-timing";
 import { type LongJobState, useLongJob } from "./use-long-job";
 
@@ -37,6 +44,8 @@ export interface LiveSolveState {
   /** the generation `result` belongs to (the plots report it back for the update timing) */
   resultGeneration: number;
   error: BenchSolveError | null;
+  /** |Zout(f)| for `result` (arrives just after it) */
+  impedance: ImpedanceResult | null;
   /** a solve is running: what is shown is from an earlier state of the circuit */
   stale: boolean;
   family: LongJobState<FamilyResult>;
@@ -57,6 +66,7 @@ export function useLiveSolve(document: BenchDocument | null, options: LiveSolveO
     result: null,
     resultGeneration: 0,
     error: null,
+    impedance: null,
     stale: false,
   });
 
@@ -84,22 +94,30 @@ export function useLiveSolve(document: BenchDocument | null, options: LiveSolveO
         inFlight.current = false;
         const newest = next.generation === generation.current;
         if (outcome.ok) {
-          setState({
+          setState((s) => ({
             status: newest ? "ready" : "solving",
             result: outcome.value,
             resultGeneration: next.generation,
             error: null,
+            impedance: s.impedance,
             stale: !newest,
-          });
+          }));
+          const frequencies = outcome.value.document.ac?.frequency ?? [];
+          if (newest) {
+            // |Zout(f)| after the live result, so the figures and the Bode plot never wait for it
+            handle.api.impedance({ circuit: next.circuit, variant: next.variant }, frequencies).then((z) => {
+              if (z.ok && next.generation === generation.current) setState((s) => ({ ...s, impedance: z.value }));
+            });
+          }
         } else if (newest) {
           setState((s) => ({ ...s, status: "error", error: outcome.error, stale: s.result !== null }));
         }
         send();
       });
     };
-    // at most one frame of delay: changes within a frame collapse into one solve
-    const frame = requestAnimationFrame(send);
-    return () => cancelAnimationFrame(frame);
+    // sent at once when the worker is free (changes within one task collapse into one solve); a change made while a
+    // solve runs waits for it, and only the newest such change is sent
+    queueMicrotask(send);
   }, [circuit, variant]);
 
   const familyRequest = useMemo((): FamilyRequest | null => {
