@@ -182,3 +182,131 @@ export const auditLog = pgTable("audit_log", {
   detail: jsonb("detail").notNull().default({}),
   createdAt: createdAt(),
 }, (t) => [index("audit_log_workspace").on(t.workspaceId, t.createdAt)]);
+
+// ——— Reviews, remarks, decisions, notifications (the review issue) ———
+
+export const reviewStatusEnum = pgEnum("review_status", ["open", "approved", "rework", "withdrawn"]);
+export const verdictEnum = pgEnum("verdict", ["approve", "rework"]);
+
+/** A request to look at one revision. */
+export const reviews = pgTable("reviews", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  designId: uuid("design_id").notNull().references(() => designs.id, { onDelete: "cascade" }),
+  revisionId: uuid("revision_id").notNull().references(() => designRevisions.id, { onDelete: "cascade" }),
+  requestedBy: uuid("requested_by").notNull().references(() => users.id),
+  message: text("message").notNull().default(""),
+  dueAt: timestamp("due_at", { withTimezone: true }),
+  status: reviewStatusEnum("status").notNull().default("open"),
+  createdAt: createdAt(),
+  closedAt: timestamp("closed_at", { withTimezone: true }),
+}, (t) => [index("reviews_design").on(t.designId)]);
+
+export const reviewReviewers = pgTable("review_reviewers", {
+  reviewId: uuid("review_id").notNull().references(() => reviews.id, { onDelete: "cascade" }),
+  userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+}, (t) => [primaryKey({ columns: [t.reviewId, t.userId] })]);
+
+/**
+ * A remark on a revision, anchored to a part, a net, a frequency range or a figure:
+ * `{ type: "part", part } | { type: "net", net } | { type: "frequency", fromHz, toHz } | { type: "figure", figure }`.
+ * Replies point at their thread's first remark.
+ */
+export const remarks = pgTable("remarks", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  designId: uuid("design_id").notNull().references(() => designs.id, { onDelete: "cascade" }),
+  revisionId: uuid("revision_id").notNull().references(() => designRevisions.id, { onDelete: "cascade" }),
+  reviewId: uuid("review_id").references(() => reviews.id, { onDelete: "set null" }),
+  parentId: uuid("parent_id"),
+  authorId: uuid("author_id").notNull().references(() => users.id),
+  body: text("body").notNull(),
+  anchor: jsonb("anchor").notNull(),
+  resolvedAt: timestamp("resolved_at", { withTimezone: true }),
+  resolvedBy: uuid("resolved_by").references(() => users.id),
+  createdAt: createdAt(),
+}, (t) => [index("remarks_design").on(t.designId, t.createdAt)]);
+
+export const decisions = pgTable("decisions", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  reviewId: uuid("review_id").notNull().references(() => reviews.id, { onDelete: "cascade" }),
+  revisionId: uuid("revision_id").notNull().references(() => designRevisions.id, { onDelete: "cascade" }),
+  reviewerId: uuid("reviewer_id").notNull().references(() => users.id),
+  verdict: verdictEnum("verdict").notNull(),
+  reason: text("reason").notNull(),
+  createdAt: createdAt(),
+});
+
+/** Figures and target checks of a revision, computed on the server by sim/ when it is saved. */
+export const revisionChecks = pgTable("revision_checks", {
+  revisionId: uuid("revision_id").primaryKey().references(() => designRevisions.id, { onDelete: "cascade" }),
+  /** the contract's `checks` array: [{ figure, variant?, value, min?, max?, pass }] */
+  checks: jsonb("checks").notNull().default([]),
+  figures: jsonb("figures").notNull().default({}),
+  allPass: boolean("all_pass"),
+  /** set when the engine could not run the revision (its message) */
+  error: text("error"),
+  /** set when a reviewer approves it: the revision's record (message, checks) is then locked */
+  approvedAt: timestamp("approved_at", { withTimezone: true }),
+  computedAt: timestamp("computed_at", { withTimezone: true }).notNull().defaultNow(),
+});
+
+export const emailStatusEnum = pgEnum("email_status", ["pending", "sent", "failed", "skipped"]);
+
+/** In-app inbox entries; the e-mail copy is sent (and retried) from the same row. */
+export const notifications = pgTable("notifications", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  /** e.g. "review.requested", "remark.created", "decision.made" */
+  kind: text("kind").notNull(),
+  title: text("title").notNull(),
+  body: text("body").notNull().default(""),
+  link: text("link").notNull(),
+  readAt: timestamp("read_at", { withTimezone: true }),
+  emailStatus: emailStatusEnum("email_status").notNull().default("pending"),
+  emailAttempts: integer("email_attempts").notNull().default(0),
+  emailLastError: text("email_last_error"),
+  nextAttemptAt: timestamp("next_attempt_at", { withTimezone: true }),
+  createdAt: createdAt(),
+}, (t) => [index("notifications_user").on(t.userId, t.createdAt), index("notifications_email").on(t.emailStatus)]);
+
+/** Per-person choices of what reaches them by e-mail and in the inbox; absent row = defaults (both on). */
+export const notificationPreferences = pgTable("notification_preferences", {
+  userId: uuid("user_id").primaryKey().references(() => users.id, { onDelete: "cascade" }),
+  emailEnabled: boolean("email_enabled").notNull().default(true),
+  /** kind → { email: boolean, inbox: boolean } overrides */
+  perKind: jsonb("per_kind").notNull().default({}),
+});
+
+// ——— Measurements and attachments (stored through the S3 client) ———
+
+export const measurementKindEnum = pgEnum("measurement_kind", ["frequency_response", "noise_spectrum"]);
+
+/** A measured curve: the original file is in object storage; only the parsed numbers are ever served as data. */
+export const measurements = pgTable("measurements", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  designId: uuid("design_id").notNull().references(() => designs.id, { onDelete: "cascade" }),
+  revisionId: uuid("revision_id").references(() => designRevisions.id, { onDelete: "set null" }),
+  kind: measurementKindEnum("kind").notNull(),
+  name: text("name").notNull(),
+  storageKey: text("storage_key").notNull(),
+  originalFilename: text("original_filename").notNull(),
+  sizeBytes: integer("size_bytes").notNull(),
+  /** { frequency: number[], level_db: number[], phase_deg?: number[] } (noise: level in dBV/√Hz or V/√Hz as mapped) */
+  data: jsonb("data").notNull(),
+  /** how the file's columns were mapped and which units were chosen in the preview */
+  mapping: jsonb("mapping").notNull().default({}),
+  uploadedBy: uuid("uploaded_by").notNull().references(() => users.id),
+  createdAt: createdAt(),
+}, (t) => [index("measurements_design").on(t.designId)]);
+
+/** Other files (photos, PDFs, sign-off reports): always downloaded as attachments, never shown inline. */
+export const attachments = pgTable("attachments", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  designId: uuid("design_id").notNull().references(() => designs.id, { onDelete: "cascade" }),
+  reviewId: uuid("review_id").references(() => reviews.id, { onDelete: "set null" }),
+  storageKey: text("storage_key").notNull(),
+  filename: text("filename").notNull(),
+  contentType: text("content_type").notNull(),
+  sizeBytes: integer("size_bytes").notNull(),
+  uploadedBy: uuid("uploaded_by").notNull().references(() => users.id),
+  createdAt: createdAt(),
+}, (t) => [index("attachments_design").on(t.designId)]);
