@@ -16,7 +16,7 @@ export function CalculatorsPanel({
 }) {
   const apply = readOnly ? undefined : onApplyValues;
   return (
-    <div className="grid gap-6 md:grid-cols-3">
+    <div className="grid grid-cols-1 gap-6 md:grid-cols-3">
       <CapsuleCalculator selected={selected} onApplyValues={apply} />
       <PhantomCalculator />
       <CableCalculator selected={selected} onApplyValues={apply} />

@@ -51,7 +51,7 @@ export function ExplainPanel({
   const job = useLongJob(runExplain, request, key);
   const outcome = job.result;
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+    <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
       <section aria-label="What moves this figure" className="space-y-2">
         <div className="flex items-center gap-3">
           <h3 className="text-sm font-semibold">What moves this figure</h3>

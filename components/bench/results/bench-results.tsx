@@ -148,8 +148,8 @@ export function BenchResults({
       data-stale={live.stale ? "true" : "false"}
     >
       {live.error && <SolveErrorPanel error={live.error} onSelectPart={onSelectPart} />}
-      <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_minmax(0,2fr)]">
-        <div className="space-y-3">
+      <div className="grid grid-cols-1 gap-4 xl:grid-cols-[minmax(0,1fr)_minmax(0,2fr)]">
+        <div className="min-w-0 space-y-3">
           <div className="flex items-center justify-between">
             <h2 className="text-lg">Figures</h2>
             {live.stale && (
@@ -228,7 +228,7 @@ export function BenchResults({
               <p className="text-sm text-ink-soft">No operating point yet.</p>
             ))}
           {tab === "overlays" && (
-            <div className="grid gap-6 md:grid-cols-2">
+            <div className="grid grid-cols-1 gap-6 md:grid-cols-2">
               <DestinationPicker value={destinations} onChange={setDestinations} />
               <OverlayControls
                 variantNames={document.circuit.variants.map((v) => v.name)}

@@ -67,7 +67,10 @@ export function OperatingPointPanel({
     .sort(([a], [b]) => a.localeCompare(b));
   const devices = Object.entries(op.parts);
   return (
-    <section aria-label="Operating point" className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.4fr)]">
+    <section
+      aria-label="Operating point"
+      className="grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.4fr)]"
+    >
       <div>
         <h3 className="mb-1 text-sm font-semibold">Net voltages</h3>
         <table className="w-full text-sm" data-testid="net-voltages">

@@ -18,7 +18,7 @@ import type {
   LiveResult,
   RevisionOverlay,
 } from "./protocol";
-import { noteChange } from "./update-timing";
+import { noteChange, noteSolved } from "./update-timing";
 import { type LongJobState, useLongJob } from "./use-long-job";
 
 export interface OverlayChoice {
@@ -92,6 +92,7 @@ export function useLiveSolve(document: BenchDocument | null, options: LiveSolveO
       inFlight.current = true;
       handle.api.live({ circuit: next.circuit, variant: next.variant }).then((outcome) => {
         inFlight.current = false;
+        noteSolved(next.generation);
         const newest = next.generation === generation.current;
         if (outcome.ok) {
           setState((s) => ({
