@@ -17,6 +17,10 @@ const SEARCH_DEBOUNCE_MS = 250;
 
 const COLUMN_SORT: Record<string, DesignSort> = { title: "title", status: "status", updatedAt: "updated", createdAt: "created" };
 
+/** Columns a phone leaves out so the table fits 390 px without sideways scrolling; the design page has them all. */
+const WIDE_ONLY = new Set(["createdBy", "updatedAt"]);
+const cellClass = (id: string) => (WIDE_ONLY.has(id) ? "hidden md:table-cell" : "");
+
 export const designsKey = (workspaceId: string) => ["designs", workspaceId] as const;
 
 /**
@@ -214,7 +218,7 @@ export function DesignsTable({ workspaceId, slug, canRestore }: { workspaceId: s
       {restore.isError ? <Notice tone="error">{restore.error.message}</Notice> : null}
 
       <div className="overflow-x-auto rounded-md border border-rule bg-paper">
-        <table className="w-full min-w-[40rem] text-left text-sm" aria-busy={query.isFetching}>
+        <table className="w-full text-left text-sm md:min-w-[40rem]" aria-busy={query.isFetching}>
           <caption className="sr-only">Designs of this workspace</caption>
           <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">
             {table.getHeaderGroups().map((group) => (
@@ -224,7 +228,7 @@ export function DesignsTable({ workspaceId, slug, canRestore }: { workspaceId: s
                   return (
                     <th
                       key={header.id}
-                      className="px-3 py-2 font-medium"
+                      className={`px-3 py-2 font-medium ${cellClass(header.column.id)}`}
                       aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
                     >
                       {header.column.getCanSort() ? (
@@ -264,7 +268,7 @@ export function DesignsTable({ workspaceId, slug, canRestore }: { workspaceId: s
               table.getRowModel().rows.map((row) => (
                 <tr key={row.id} className="border-t border-rule hover:bg-paper-deep/50">
                   {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className="px-3 py-2 align-middle">
+                    <td key={cell.id} className={`px-3 py-2 align-middle ${cellClass(cell.column.id)}`}>
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}
                     </td>
                   ))}

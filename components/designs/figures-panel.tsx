@@ -1,5 +1,5 @@
 import type { Figures } from "@/sim";
-import { formatDb, formatSi } from "./format-si";
+import { formatFixed, formatSi } from "@/components/bench/results/format";
 
 interface Row {
   label: string;
@@ -11,13 +11,13 @@ function rows(f: Figures): Row[] {
   const num = (v: unknown) => (typeof v === "number" ? v : null);
   return [
     { label: "Sensitivity", value: formatSi(num(f.sensitivity_v_per_pa), "V/Pa") },
-    { label: "Sensitivity re 1 V/Pa", value: formatDb(num(f.sensitivity_db_re_1v_per_pa), "dB") },
-    { label: "Gain at 1 kHz", value: formatDb(num(f.gain_1khz_db), "dB") },
+    { label: "Sensitivity re 1 V/Pa", value: formatFixed(num(f.sensitivity_db_re_1v_per_pa), 1, "dB") },
+    { label: "Gain at 1 kHz", value: formatFixed(num(f.gain_1khz_db), 1, "dB") },
     { label: "Low corner (−3 dB)", value: formatSi(num(f.low_corner_hz), "Hz") },
     { label: "High corner (−3 dB)", value: formatSi(num(f.high_corner_hz), "Hz") },
     { label: "Output impedance at 1 kHz", value: formatSi(num(f.output_impedance_1khz_ohm), "Ω") },
     { label: "Polarity", value: typeof f.polarity === "string" ? f.polarity : "—" },
-    { label: "Self-noise", value: formatDb(num(f.self_noise_dba_spl), "dB(A) SPL") },
+    { label: "Self-noise", value: formatFixed(num(f.self_noise_dba_spl), 1, "dB(A) SPL") },
   ];
 }
 

@@ -1,5 +1,5 @@
 import type { OpResult } from "@/sim";
-import { formatSi } from "./format-si";
+import { formatSi } from "@/components/bench/results/format";
 
 /** Net voltages and each active device's region and bias current from the DC operating point. */
 export function OperatingPoint({ op }: { op: OpResult }) {

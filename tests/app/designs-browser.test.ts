@@ -1,0 +1,149 @@
+import type { Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { DEMO_PASSWORD, DEMO_WORKSPACE } from "../../db/demo-people";
+import { type Browser, openBrowser, screenshotPath } from "./chromium";
+import { withParameter } from "./design-fixtures";
+
+const baseUrl = inject("baseUrl");
+const DESIGN = "LA-47 studio condenser";
+const PHONE = { width: 390, height: 844 };
+
+async function signIn(page: Page, email: string) {
+  await page.goto(`${baseUrl}/sign-in?callbackUrl=/w/${DEMO_WORKSPACE.slug}`);
+  await page.getByLabel("E-mail").first().fill(email);
+  await page.getByLabel("Password").fill(DEMO_PASSWORD);
+  await page.getByRole("button", { name: "Sign in", exact: true }).click();
+  await page.waitForURL(`${baseUrl}/w/${DEMO_WORKSPACE.slug}`);
+}
+
+/** Nothing wider than the viewport (no sideways scrolling of the page itself). */
+async function expectNoOverflow(page: Page) {
+  const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+  expect(overflow).toBeLessThanOrEqual(0);
+}
+
+async function openDesignFromTable(page: Page) {
+  await page.getByLabel("Search titles").fill("LA-47");
+  const link = page.getByRole("link", { name: DESIGN });
+  await link.waitFor();
+  await expect.poll(() => page.getByRole("row").count()).toBe(2); // header + the one match, once the search applies
+  await link.click();
+  await page.getByRole("heading", { level: 1, name: DESIGN }).waitFor();
+}
+
+describe("designs in Chromium", () => {
+  let browser: Browser;
+  let linkAddress = "";
+  beforeAll(async () => {
+    browser = await openBrowser();
+  });
+  afterAll(async () => {
+    await browser.close();
+  });
+
+  it("the demo reviewer opens a design from the table, sees its history and what changed, and cannot save", async () => {
+    const page = await browser.context.newPage();
+    await signIn(page, "margit@larkfield.example");
+    await page.getByRole("heading", { level: 1, name: "Designs" }).waitFor();
+    await page.getByRole("link", { name: DESIGN }).waitFor();
+    await expect(page.getByRole("button", { name: "New design" }).count()).resolves.toBe(0);
+    await page.screenshot({ path: screenshotPath("designs-table-desktop"), fullPage: true });
+    await page.setViewportSize(PHONE);
+    await expectNoOverflow(page);
+    await page.screenshot({ path: screenshotPath("designs-table-phone"), fullPage: true });
+    await page.setViewportSize({ width: 1440, height: 900 });
+
+    await openDesignFromTable(page);
+    const history = page.getByRole("list", { name: "Revisions, newest first" });
+    await expect(history.getByRole("listitem").count()).resolves.toBeGreaterThanOrEqual(4);
+    await expect(history.textContent()).resolves.toContain("Bias resistors 1G → 2G2 for a lower corner");
+    await expect(history.textContent()).resolves.toContain("Ines Caldero");
+    const changed = page.getByRole("region", { name: /What changed in r\d+/ });
+    await expect(changed.textContent()).resolves.toMatch(/RB\s*1G\s*→\s*2G2/);
+    const figures = page.getByRole("region", { name: "Figures" });
+    await expect(figures.textContent()).resolves.toMatch(/Sensitivity.*mV\/Pa/);
+    await page.getByRole("img", { name: /Magnitude of the output/ }).waitFor();
+    // No save form for a reviewer, and the server refuses a save sent anyway.
+    await expect(page.getByRole("form", { name: "Save a revision" }).count()).resolves.toBe(0);
+    await expect(page.getByText(/saving is for designers and owners/).isVisible()).resolves.toBe(true);
+    const status = await page.evaluate(async () => {
+      const href = document.querySelector("a[href*='/export']")!.getAttribute("href")!;
+      const base = href.slice(0, href.indexOf("/revisions/"));
+      const response = await fetch(`${base}/revisions`, {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify({ parentRevisionId: null, circuit: {}, message: "sneaky" }),
+      });
+      return response.status;
+    });
+    expect(status).toBe(403);
+    await page.screenshot({ path: screenshotPath("design-page-reviewer-desktop"), fullPage: true });
+    await page.close();
+  });
+
+  it("a designer saves a revision by pasting a circuit file, and makes a public bench link", async () => {
+    const designer = await openBrowser();
+    try {
+      const page = await designer.context.newPage();
+      await signIn(page, "tomas@larkfield.example");
+      await openDesignFromTable(page);
+      const before = await page.getByRole("list", { name: "Revisions, newest first" }).getByRole("listitem").count();
+      const form = page.getByRole("form", { name: "Save a revision" });
+      // A malformed file first: the message says what to fix and nothing is saved.
+      await form.getByLabel("…or paste the circuit file").fill("{ this is not json");
+      await form.getByLabel("What changed").fill("Broken paste");
+      await form.getByRole("button", { name: "Save revision" }).click();
+      await form.getByText(/not valid JSON/).waitFor();
+      await form.getByLabel("…or paste the circuit file").fill(JSON.stringify(withParameter("RS", "3k3")));
+      await form.getByLabel("What changed").fill("Source resistor to 3k3 from the browser");
+      await form.getByRole("button", { name: "Save revision" }).click();
+      await form.getByText(/Saved as r\d+/).waitFor();
+      const history = page.getByRole("list", { name: "Revisions, newest first" });
+      await history.getByText("Source resistor to 3k3 from the browser").waitFor();
+      await expect(history.getByRole("listitem").count()).resolves.toBe(before + 1);
+      await page.screenshot({ path: screenshotPath("design-page-desktop"), fullPage: true });
+      await page.setViewportSize(PHONE);
+      await expectNoOverflow(page);
+      await page.screenshot({ path: screenshotPath("design-page-phone"), fullPage: true });
+      await page.setViewportSize({ width: 1440, height: 900 });
+
+      const links = page.getByRole("form", { name: "Make a bench link" });
+      await links.getByLabel("Variant").selectOption("pad");
+      await links.getByLabel("From (Hz)").fill("20");
+      await links.getByLabel("To (Hz)").fill("20000");
+      await links.getByLabel("Label").fill("For the review meeting");
+      await links.getByLabel("Opens without signing in").check();
+      await links.getByRole("button", { name: "Make bench link" }).click();
+      linkAddress = (await page.getByTestId("new-bench-link").textContent()) ?? "";
+      expect(linkAddress).toMatch(/\/b\/[A-Za-z0-9_-]{43}$/);
+      await page.getByText("For the review meeting").waitFor();
+      await page.close();
+    } finally {
+      await designer.close();
+    }
+  });
+
+  it("the bench link opens in a fresh browser without signing in, showing the revision, figures, parts and view", async () => {
+    expect(linkAddress).not.toBe("");
+    const stranger = await openBrowser();
+    try {
+      const page = await stranger.context.newPage();
+      const response = await page.goto(linkAddress);
+      expect(response?.status()).toBe(200);
+      await page.getByRole("heading", { level: 1, name: DESIGN }).waitFor();
+      await expect(page.getByText("Bench link · read-only").isVisible()).resolves.toBe(true);
+      await expect(page.getByRole("list", { name: "The view this link opens" }).textContent()).resolves.toMatch(/Variant: pad.*Range: 20–20000 Hz/);
+      await expect(page.getByRole("region", { name: "Figures" }).textContent()).resolves.toMatch(/mV\/Pa/);
+      await expect(page.getByRole("region", { name: "Parts" }).textContent()).resolves.toContain("RSRC");
+      await page.getByRole("img", { name: /variant “pad”, 20–20000 Hz/ }).waitFor();
+      await expect(page.getByTestId("signed-in-name").count()).resolves.toBe(0);
+      await page.screenshot({ path: screenshotPath("bench-link-desktop"), fullPage: true });
+      await page.setViewportSize(PHONE);
+      await expectNoOverflow(page);
+      await page.screenshot({ path: screenshotPath("bench-link-phone"), fullPage: true });
+      await page.close();
+    } finally {
+      await stranger.close();
+    }
+  });
+});
