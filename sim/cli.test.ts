@@ -96,12 +96,12 @@ describe("the headless command", { timeout: CLI_TIMEOUT_MS }, () => {
   it("rejects a missing file argument, an unknown flag and an unreadable file", async () => {
     const [missing, unknown, unreadable] = await Promise.all([
       errorOf(),
-      errorOf("sim/examples/demo-microphone.json", "--check"),
+      errorOf("sim/examples/demo-microphone.json", "--gate"),
       errorOf(path.join(dir, "does-not-exist.json")),
     ]);
     expect(missing.code).toBe("invalid_arguments");
     expect(unknown.code).toBe("invalid_arguments");
-    expect(unknown.message).toContain("Unknown option --check");
+    expect(unknown.message).toContain("Unknown option --gate");
     expect(unreadable.code).toBe("unreadable_file");
   });
 

@@ -6,7 +6,8 @@
 import { elaborate } from "./circuit/elaborate";
 import { checkTopology } from "./circuit/topology";
 import type { ElaboratedCircuit } from "./circuit/types";
-import type { OutputDocument, SimulationResult, SweepPoint } from "./results";
+import { BASE_VARIANT, checkTargets, type FiguresByVariant, variantsNeeded } from "./analyses/targets";
+import type { OutputDocument, SimulationResult, SweepPoint, TargetCheck } from "./results";
 
 export type Simulate = (circuit: ElaboratedCircuit) => SimulationResult;
 
@@ -50,5 +51,28 @@ export function runWith(simulate: Simulate, file: unknown, options: RunOptions =
     });
   }
   if (result.spread) document.spread = result.spread;
+  if (circuit.targets.length > 0) document.checks = targetChecks(simulate, file, circuit, result, options);
   return withFiniteNumbers(document);
+}
+
+/**
+ * The contract's `checks`: a target without a variant is held against the run itself (the base design, or the
+ * `--variant` chosen); a target for another variant runs that variant's primary analyses (no sweep, no spread).
+ */
+function targetChecks(
+  simulate: Simulate,
+  file: unknown,
+  circuit: ElaboratedCircuit,
+  result: SimulationResult,
+  options: RunOptions,
+): TargetCheck[] {
+  const byVariant: FiguresByVariant = { [BASE_VARIANT]: result.figures };
+  if (options.variant !== undefined) byVariant[options.variant] = result.figures;
+  for (const name of variantsNeeded(circuit.targets)) {
+    if (byVariant[name]) continue;
+    const other = elaborate(file, { variant: name });
+    const { sweep: _sweep, spread: _spread, ...analyses } = other.analyses;
+    byVariant[name] = solve(simulate, { ...other, analyses }).figures;
+  }
+  return checkTargets(circuit, byVariant);
 }
