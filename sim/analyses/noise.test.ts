@@ -211,7 +211,7 @@ describe("noise analysis", () => {
         if (gen.plus >= 0) b[gen.plus][0] += 1;
         if (gen.minus >= 0) b[gen.minus][0] -= 1;
         const v = lusolve(a, matrix(b)).toArray() as unknown as { re: number; im: number }[][];
-        const vo = complex(v[out][0]);
+        const vo = v[out][0];
         const power = (vo.re * vo.re + vo.im * vo.im) * gen.psd(f);
         expected.set(gen.part, (expected.get(gen.part) ?? 0) + power);
       }
