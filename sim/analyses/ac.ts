@@ -2,35 +2,54 @@
  * AC analysis (contract): the small-signal response V(plus) − V(minus) at every requested frequency, linearised
  * at the operating point, as { frequency, re, im, magnitude_db, phase_deg }. Warnings: a capsule whose gap the
  * drive closes by more than CAPSULE_GAP_WARNING_FRACTION (the linear capsule model no longer holds).
+ *
+ * A sweep factors SWEEP_LANES frequencies at a time (sim/mna/sparse-lu-complex-lanes.ts) on the same G and C the
+ * model stamps, with the same drive; each lane's arithmetic is the model's own, so every point equals
+ * `model.response` at that frequency. A frequency whose static pivots fail is handed to `model.response` itself
+ * (dense fallback, singular-circuit errors named as usual).
  */
+import type { AcDriveContext, AcStampContext, Device } from "../devices/device";
 import { numberValue } from "../devices/device";
+import { SparseLuComplexLanes, SWEEP_LANES } from "../mna/sparse-lu-complex-lanes";
 import type { AcResult, SimWarning } from "../results";
-import type { SmallSignalModel } from "./small-signal";
+import type { ComplexValue, SmallSignalModel } from "./small-signal";
 
 /** Contract: warn when the drive closes a capsule gap by more than 10 %. */
 export const CAPSULE_GAP_WARNING_FRACTION = 0.1;
+
+const RADIANS_TO_DEGREES = 180 / Math.PI;
+
+/**
+ * Below this |V|² the squared magnitude has lost precision to underflow (|V| < 1e-154), and above it overflows:
+ * outside that range the magnitude is taken with Math.hypot, which is exact there but slower than a square root.
+ */
+const SMALLEST_SAFE_MAGNITUDE2 = 1e-300;
+const LARGEST_SAFE_MAGNITUDE2 = 1e300;
 
 export function toDecibels(magnitude: number): number {
   return 20 * Math.log10(magnitude);
 }
 
-export function runAc(model: SmallSignalModel, frequencies: number[], pressure: number): AcResult {
+/** 20·log10|re + j·im| from |V|² where that is exact enough (10·log10 of the square), else via Math.hypot. */
+function decibelsOf(re: number, im: number): number {
+  const magnitude2 = re * re + im * im;
+  if (magnitude2 > SMALLEST_SAFE_MAGNITUDE2 && magnitude2 < LARGEST_SAFE_MAGNITUDE2) return 10 * Math.log10(magnitude2);
+  return toDecibels(Math.hypot(re, im));
+}
+
+export function runAc(model: SmallSignalModel, frequencies: ArrayLike<number>, pressure: number): AcResult {
   const count = frequencies.length;
-  const result: AcResult = {
-    frequency: frequencies.slice(),
-    re: new Array<number>(count),
-    im: new Array<number>(count),
-    magnitude_db: new Array<number>(count),
-    phase_deg: new Array<number>(count),
-  };
-  const value = { re: 0, im: 0 };
+  const re = new Array<number>(count).fill(0);
+  const im = new Array<number>(count).fill(0);
+  sweepFor(model).run(frequencies, pressure, re, im);
+  // Magnitude and phase only once the solves are done: the hot loop above stays free of transcendental calls.
+  const magnitude_db = new Array<number>(count).fill(0);
+  const phase_deg = new Array<number>(count).fill(0);
   for (let i = 0; i < count; i++) {
-    model.response(frequencies[i], pressure, value);
-    result.re[i] = value.re;
-    result.im[i] = value.im;
-    result.magnitude_db[i] = toDecibels(Math.hypot(value.re, value.im));
-    result.phase_deg[i] = (Math.atan2(value.im, value.re) * 180) / Math.PI;
+    magnitude_db[i] = decibelsOf(re[i], im[i]);
+    phase_deg[i] = Math.atan2(im[i], re[i]) * RADIANS_TO_DEGREES;
   }
+  const result: AcResult = { frequency: Array.from(frequencies), re, im, magnitude_db, phase_deg };
   const warnings = capsuleWarnings(model, pressure);
   if (warnings.length > 0) result.warnings = warnings;
   return result;
@@ -49,4 +68,122 @@ export function capsuleWarnings(model: SmallSignalModel, pressure: number): SimW
     }
   }
   return out;
+}
+
+/**
+ * One sweep engine per model: a model's G and C are stamped once when it is built (small-signal.ts), so the
+ * engine's copy, stamped the same way from the same operating point, stays valid for the model's lifetime.
+ */
+const sweeps = new WeakMap<SmallSignalModel, AcSweep>();
+
+function sweepFor(model: SmallSignalModel): AcSweep {
+  let sweep = sweeps.get(model);
+  if (!sweep) {
+    sweep = new AcSweep(model);
+    sweeps.set(model, sweep);
+  }
+  return sweep;
+}
+
+/** G, C, drive and lane-interleaved buffers for sweeping one small-signal model; nothing allocated per point. */
+class AcSweep {
+  private readonly model: SmallSignalModel;
+  private readonly conductance: Float64Array;
+  private readonly reactance: Float64Array;
+  private readonly lu: SparseLuComplexLanes;
+  private readonly drivers: Device[];
+  private readonly drive: LaneDriveContext;
+  private readonly rhsRe: Float64Array;
+  private readonly rhsIm: Float64Array;
+  private readonly omegas = new Float64Array(SWEEP_LANES);
+  private readonly plus: number;
+  private readonly minus: number;
+  private readonly fallback: ComplexValue = { re: 0, im: 0 };
+
+  constructor(model: SmallSignalModel) {
+    this.model = model;
+    const { compiled, op } = model;
+    const structure = compiled.ac;
+    const n = compiled.unknowns.length;
+    this.conductance = new Float64Array(structure.nnz + 1);
+    this.reactance = new Float64Array(structure.nnz + 1);
+    const positions = structure.positionOfHandle;
+    const { conductance, reactance } = this;
+    // The same stamps, in the same order, as SmallSignalModel's constructor: identical G and C.
+    const ctx: AcStampContext = {
+      x: op.x,
+      thermalVoltage: op.thermalVoltage,
+      addConductance: (h, v) => {
+        conductance[positions[h]] += v;
+      },
+      addReactance: (h, v) => {
+        reactance[positions[h]] += v;
+      },
+    };
+    for (const d of compiled.devices) d.stampAc(ctx);
+    this.lu = new SparseLuComplexLanes(structure);
+    // Row n of each lane is the ground scratch row the devices never write (they skip row < 0); kept for symmetry
+    // with the model's right-hand side.
+    this.rhsRe = new Float64Array((n + 1) * SWEEP_LANES);
+    this.rhsIm = new Float64Array((n + 1) * SWEEP_LANES);
+    this.drivers = compiled.devices.filter((d) => d.stampAcDrive !== undefined);
+    this.drive = new LaneDriveContext(op.x, this.rhsRe, this.rhsIm);
+    this.plus = compiled.netIndex.get(compiled.circuit.output.plus) ?? -1;
+    this.minus = compiled.netIndex.get(compiled.circuit.output.minus) ?? -1;
+  }
+
+  /** Response at every frequency into outRe/outIm (same length as `frequencies`). */
+  run(frequencies: ArrayLike<number>, pressure: number, outRe: number[], outIm: number[]): void {
+    const count = frequencies.length;
+    const { omegas, drive, drivers, lu, plus, minus } = this;
+    drive.pressure = pressure;
+    for (let start = 0; start < count; start += SWEEP_LANES) {
+      const used = Math.min(SWEEP_LANES, count - start);
+      this.rhsRe.fill(0);
+      this.rhsIm.fill(0);
+      for (let b = 0; b < SWEEP_LANES; b++) {
+        // A short last group repeats its last frequency in the unused lanes (their results are not read).
+        const frequency = frequencies[start + Math.min(b, used - 1)];
+        omegas[b] = 2 * Math.PI * frequency;
+        drive.lane = b;
+        drive.frequency = frequency;
+        for (const d of drivers) d.stampAcDrive!(drive);
+      }
+      const failed = lu.factorAt(this.conductance, this.reactance, omegas);
+      lu.solve(this.rhsRe, this.rhsIm);
+      for (let b = 0; b < used; b++) {
+        const i = start + b;
+        if (failed & (1 << b)) {
+          this.model.response(frequencies[i], pressure, this.fallback);
+          outRe[i] = this.fallback.re;
+          outIm[i] = this.fallback.im;
+          continue;
+        }
+        outRe[i] = (plus < 0 ? 0 : lu.solutionRe(plus, b)) - (minus < 0 ? 0 : lu.solutionRe(minus, b));
+        outIm[i] = (plus < 0 ? 0 : lu.solutionIm(plus, b)) - (minus < 0 ? 0 : lu.solutionIm(minus, b));
+      }
+    }
+  }
+}
+
+/** The drive context of one lane at a time, writing into the lane-interleaved right-hand side. */
+class LaneDriveContext implements AcDriveContext {
+  readonly x: Float64Array;
+  frequency = 0;
+  pressure = 0;
+  lane = 0;
+  private readonly rhsRe: Float64Array;
+  private readonly rhsIm: Float64Array;
+
+  constructor(x: Float64Array, rhsRe: Float64Array, rhsIm: Float64Array) {
+    this.x = x;
+    this.rhsRe = rhsRe;
+    this.rhsIm = rhsIm;
+  }
+
+  addRhs(row: number, re: number, im: number): void {
+    if (row < 0) return;
+    this.rhsRe[row * SWEEP_LANES + this.lane] += re;
+    this.rhsIm[row * SWEEP_LANES + this.lane] += im;
+  }
 }

@@ -4,12 +4,17 @@
  * Monte Carlo `spread` over the tolerances (spread.ts) that repeats the same analyses per run on the same compiled
  * structure. The operating point an analysis linearises at is solved at that analysis's temperature.
  */
-import { DEFAULT_TEMPERATURE_K, type AnalysisRequests, type ElaboratedCircuit } from "../circuit/types";
+import { expandFrequencies as expandFrequencyRequest } from "../circuit/frequencies";
+import {
+  type AnalysisRequests,
+  DEFAULT_TEMPERATURE_K,
+  type ElaboratedCircuit,
+  type FrequencyRequest,
+} from "../circuit/types";
 import type { SimulationResult } from "../results";
 import { runAc } from "./ac";
 import { type CompiledCircuit, compileCircuit } from "./compile";
 import { computeFigures } from "./figures";
-import { expandFrequencies } from "./frequency-grid";
 import { runNoise } from "./noise";
 import { AdjointNoiseSystem } from "./noise-adjoint";
 import { selfNoiseDbaSpl } from "./noise-figures";
@@ -19,6 +24,14 @@ import { runSpread } from "./spread";
 
 /** Contract: capsules are driven at 1 Pa unless the ac analysis says otherwise. */
 export const DEFAULT_PRESSURE_PA = 1;
+
+/**
+ * The frequencies of a request (sim/circuit/frequencies.ts: the one expansion, also behind the size limit's
+ * count) as the plain array the analyses and their JSON results take.
+ */
+function expandFrequencies(request: FrequencyRequest): number[] {
+  return Array.from(expandFrequencyRequest(request));
+}
 
 export interface SolveOptions {
   /** produce the `op` document when op is requested (Monte Carlo runs skip it) */

@@ -56,4 +56,18 @@ export class ComplexSystem {
     const n = this.structure.size;
     if (!allFinite(solRe, n) || !allFinite(solIm, n)) throw new SingularMatrixError(0, "solution is not finite");
   }
+
+  /**
+   * Solve the transposed system A(ω)ᵀ·y = b (not conjugated) with the current factors — the adjoint solve of the
+   * noise analysis, without a second structure. Same conventions as `solve`.
+   */
+  solveTransposed(rhsRe: ArrayLike<number>, rhsIm: ArrayLike<number>, solRe: Float64Array, solIm: Float64Array): void {
+    if (!this.useDense) {
+      this.lu.solveTransposed(rhsRe, rhsIm, solRe, solIm);
+      return;
+    }
+    this.dense!.solveTransposed(rhsRe, rhsIm, solRe, solIm);
+    const n = this.structure.size;
+    if (!allFinite(solRe, n) || !allFinite(solIm, n)) throw new SingularMatrixError(0, "solution is not finite");
+  }
 }

@@ -13,12 +13,16 @@ export class DenseLuComplex {
   readonly re: Float64Array;
   readonly im: Float64Array;
   private readonly rowOfStep: Int32Array;
+  private readonly transposedWorkRe: Float64Array;
+  private readonly transposedWorkIm: Float64Array;
 
   constructor(size: number) {
     this.size = size;
     this.re = new Float64Array(size * size);
     this.im = new Float64Array(size * size);
     this.rowOfStep = new Int32Array(size);
+    this.transposedWorkRe = new Float64Array(size);
+    this.transposedWorkIm = new Float64Array(size);
   }
 
   clear(): void {
@@ -130,6 +134,52 @@ export class DenseLuComplex {
       const m2 = re[d] * re[d] + im[d] * im[d];
       solRe[i] = (sr * re[d] + si * im[d]) / m2;
       solIm[i] = (si * re[d] - sr * im[d]) / m2;
+    }
+  }
+
+  /**
+   * Solve the transposed system Aᵀ·y = b (not conjugated) with the factors: P·A = L·U gives Aᵀ = Uᵀ·Lᵀ·P, so
+   * solve Uᵀ (lower) forwards, Lᵀ (unit upper) backwards, then undo the row permutation.
+   */
+  solveTransposed(
+    rhsRe: ArrayLike<number>,
+    rhsIm: ArrayLike<number> | null,
+    solRe: Float64Array,
+    solIm: Float64Array,
+  ): void {
+    const n = this.size;
+    const re = this.re;
+    const im = this.im;
+    const perm = this.rowOfStep;
+    const zr = this.transposedWorkRe;
+    const zi = this.transposedWorkIm;
+    for (let i = 0; i < n; i++) {
+      let sr = rhsRe[i];
+      let si = rhsIm ? rhsIm[i] : 0;
+      for (let k = 0; k < i; k++) {
+        const at = k * n + i;
+        sr -= re[at] * zr[k] - im[at] * zi[k];
+        si -= re[at] * zi[k] + im[at] * zr[k];
+      }
+      const d = i * n + i;
+      const m2 = re[d] * re[d] + im[d] * im[d];
+      zr[i] = (sr * re[d] + si * im[d]) / m2;
+      zi[i] = (si * re[d] - sr * im[d]) / m2;
+    }
+    for (let i = n - 1; i >= 0; i--) {
+      let sr = zr[i];
+      let si = zi[i];
+      for (let k = i + 1; k < n; k++) {
+        const at = k * n + i;
+        sr -= re[at] * zr[k] - im[at] * zi[k];
+        si -= re[at] * zi[k] + im[at] * zr[k];
+      }
+      zr[i] = sr;
+      zi[i] = si;
+    }
+    for (let i = 0; i < n; i++) {
+      solRe[perm[i]] = zr[i];
+      solIm[perm[i]] = zi[i];
     }
   }
 }

@@ -88,8 +88,10 @@ export class SparseLuComplex {
       const pi = im[d];
       const mag2 = pr * pr + pi * pi;
       if (!(rowMax2 > 0) || mag2 < tol2 * rowMax2) return false;
-      invRe[i] = pr / mag2;
-      invIm[i] = -pi / mag2;
+      // One division per pivot (the lane-parallel sweep, sparse-lu-complex-lanes.ts, does the same arithmetic).
+      const inverseMag2 = 1 / mag2;
+      invRe[i] = pr * inverseMag2;
+      invIm[i] = -pi * inverseMag2;
     }
     return true;
   }
@@ -131,6 +133,57 @@ export class SparseLuComplex {
     for (let q = 0; q < n; q++) {
       solRe[originalColumnOf[q]] = wr[q];
       solIm[originalColumnOf[q]] = wi[q];
+    }
+  }
+
+  /**
+   * Solve the TRANSPOSED system Aᵀ·y = b (not the conjugate transpose) with the same factors, as the adjoint
+   * noise method needs: one solve gives the transfer from every source to one output. With P·A·Q = L·U (P the
+   * row order originalRowOf, Q the column order originalColumnOf), Aᵀ = Q·Uᵀ·Lᵀ·P, so: gather b by column order,
+   * solve Uᵀ (lower, by columns of the row-stored U), then Lᵀ (unit upper, by columns of the row-stored L), and
+   * scatter by row order. Right-hand side and solution in original unknown order.
+   */
+  solveTransposed(rhsRe: ArrayLike<number>, rhsIm: ArrayLike<number>, solRe: Float64Array, solIm: Float64Array): void {
+    const s = this.structure;
+    const re = this.re;
+    const im = this.im;
+    const wr = this.workRe;
+    const wi = this.workIm;
+    const { rowStart, columnOf, diagonalPosition, originalRowOf, originalColumnOf } = s;
+    const invRe = this.inversePivotRe;
+    const invIm = this.inversePivotIm;
+    const n = s.size;
+    for (let q = 0; q < n; q++) {
+      wr[q] = rhsRe[originalColumnOf[q]];
+      wi[q] = rhsIm[originalColumnOf[q]];
+    }
+    // Uᵀ·z = c: z[p] is final once every earlier row's contribution is subtracted; push it to the later ones.
+    for (let p = 0; p < n; p++) {
+      const cr = wr[p];
+      const ci = wi[p];
+      const zr = cr * invRe[p] - ci * invIm[p];
+      const zi = cr * invIm[p] + ci * invRe[p];
+      wr[p] = zr;
+      wi[p] = zi;
+      for (let k = diagonalPosition[p] + 1; k < rowStart[p + 1]; k++) {
+        const c = columnOf[k];
+        wr[c] -= re[k] * zr - im[k] * zi;
+        wi[c] -= re[k] * zi + im[k] * zr;
+      }
+    }
+    // Lᵀ·w = z, unit diagonal: from the last row up, push each final w[p] to the earlier rows.
+    for (let p = n - 1; p >= 0; p--) {
+      const xr = wr[p];
+      const xi = wi[p];
+      for (let k = rowStart[p]; k < diagonalPosition[p]; k++) {
+        const c = columnOf[k];
+        wr[c] -= re[k] * xr - im[k] * xi;
+        wi[c] -= re[k] * xi + im[k] * xr;
+      }
+    }
+    for (let p = 0; p < n; p++) {
+      solRe[originalRowOf[p]] = wr[p];
+      solIm[originalRowOf[p]] = wi[p];
     }
   }
 }
