@@ -38,11 +38,11 @@ async function findDesign(page: Page): Promise<Seeded> {
   const { workspaces } = await (await api.get(`${baseUrl}/api/workspaces`)).json();
   const workspaceId = workspaces.find((w: { slug: string }) => w.slug === "larkfield").workspaceId;
   const list = await (await api.get(`${baseUrl}/api/workspaces/${workspaceId}/designs?q=LA-47`)).json();
-  const design = (list.designs ?? list.items).find((d: { title: string }) => d.title === DESIGN_TITLE);
+  const design = list.rows.find((d: { title: string }) => d.title === DESIGN_TITLE);
   const { design: full } = await (
     await api.get(`${baseUrl}/api/workspaces/${workspaceId}/designs/${design.id}`)
   ).json();
-  const revisionId = full.headRevisionId ?? full.head?.id;
+  const revisionId = full.headRevisionId;
   const { revision } = await (
     await api.get(`${baseUrl}/api/workspaces/${workspaceId}/designs/${design.id}/revisions/${revisionId}`)
   ).json();
@@ -72,7 +72,7 @@ async function bodeTraceCount(page: Page): Promise<number> {
 }
 
 async function setParameter(page: Page, name: string, value: string): Promise<void> {
-  const input = page.getByLabel(`parameter ${name}`);
+  const input = page.getByLabel(`parameter ${name}`, { exact: true });
   await input.fill(value);
   await input.press("Enter");
 }
@@ -111,7 +111,7 @@ describe("bench live results in Chromium", () => {
   it("draws the response into two destination presets as a family, with figures matching the engine", async () => {
     await page.getByRole("tab", { name: "Destinations & overlays" }).click();
     const chosen = [DESTINATION_PRESETS[0], DESTINATION_PRESETS[2]];
-    for (const d of chosen) await page.getByLabel(d.name).check();
+    for (const d of chosen) await page.getByLabel(d.name, { exact: true }).check();
     for (const d of chosen) {
       const row = page.locator(`[data-curve="destination:${d.id}"]`);
       await row.waitFor({ timeout: 30_000 });
@@ -122,13 +122,13 @@ describe("bench live results in Chromium", () => {
     }
     // live + two destinations, each a magnitude and a phase trace
     await expect.poll(() => bodeTraceCount(page), { timeout: 30_000 }).toBe(6);
-    for (const d of chosen) await page.getByLabel(d.name).uncheck();
+    for (const d of chosen) await page.getByLabel(d.name, { exact: true }).uncheck();
     await expect.poll(() => bodeTraceCount(page), { timeout: 30_000 }).toBe(2);
   });
 
   it("overlays two variants; the hotter bias is 20·log10(80/64) dB more sensitive (sensitivity ∝ polarisation)", async () => {
-    await page.getByLabel("hotter bias").check();
-    await page.getByLabel("pad").check();
+    await page.getByLabel("hotter bias", { exact: true }).check();
+    await page.getByLabel("pad", { exact: true }).check();
     const hot = page.locator('[data-curve="variant:hotter bias"]');
     await hot.waitFor({ timeout: 30_000 });
     await page.locator('[data-curve="variant:pad"]').waitFor();
@@ -136,8 +136,8 @@ describe("bench live results in Chromium", () => {
     await expect(hot.textContent()).resolves.toContain(formatFixed(expected.sensitivity_db_re_1v_per_pa as number, 2));
     await expect.poll(() => bodeTraceCount(page), { timeout: 30_000 }).toBe(6);
     await page.screenshot({ path: screenshotPath("bench-results-variants") });
-    await page.getByLabel("hotter bias").uncheck();
-    await page.getByLabel("pad").uncheck();
+    await page.getByLabel("hotter bias", { exact: true }).uncheck();
+    await page.getByLabel("pad", { exact: true }).uncheck();
   });
 
   it("keeps a pinned result while a value changes, then clears it", async () => {

@@ -67,7 +67,7 @@ export function DestinationPicker({
         {DESTINATION_PRESETS.map((d) => (
           <li key={d.id}>
             <label className="flex items-baseline gap-2 text-sm">
-              <input type="checkbox" checked={chosen.has(d.id)} onChange={() => toggle(d)} />
+              <input type="checkbox" aria-label={d.name} checked={chosen.has(d.id)} onChange={() => toggle(d)} />
               <span>{d.name}</span>
               <span className="font-mono text-xs text-ink-soft">{describeImpedance(d)}</span>
             </label>
