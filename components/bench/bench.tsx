@@ -169,7 +169,7 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
         </div>
       )}
       <div className="grid h-[62vh] min-h-[420px] grid-cols-1 border-b border-rule md:h-[calc(100vh-11rem)] md:max-h-[760px] md:grid-cols-[176px_minmax(0,1fr)_288px]">
-        <aside className="hidden border-r border-rule bg-paper-deep/40 md:block" aria-label="Tray panel">
+        <aside className="hidden min-h-0 overflow-y-auto border-r border-rule bg-paper-deep/40 md:block" aria-label="Tray panel">
           {!readOnly ? <Tray /> : <p className="p-3 text-xs text-ink-soft">Read-only: the tray is for designers.</p>}
         </aside>
         <div className="relative min-h-0 min-w-0">
@@ -189,7 +189,7 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
             </div>
           )}
         </div>
-        <aside className="hidden overflow-y-auto border-l border-rule p-3 md:block" aria-label="Part sheet panel">
+        <aside className="hidden min-h-0 overflow-y-auto border-l border-rule p-3 md:block" aria-label="Part sheet panel">
           <SheetPanel />
         </aside>
       </div>

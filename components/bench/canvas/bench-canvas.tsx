@@ -18,7 +18,7 @@ import {
   ReactFlow,
   useReactFlow,
 } from "@xyflow/react";
-import { type DragEvent, type KeyboardEvent, useCallback, useMemo, useState } from "react";
+import { type DragEvent, type KeyboardEvent, useCallback, useMemo, useRef, useState } from "react";
 import type { SimErrorJson } from "@/sim/errors";
 import { PART_KINDS, type PartKind } from "@/sim/circuit/types";
 import { GRID } from "../document/layout";
@@ -49,6 +49,8 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
   const readOnly = useBench((s) => s.readOnly);
   const flow = useReactFlow();
   const [help, setHelp] = useState(false);
+  // the canvas takes keyboard focus when its background is clicked, so shortcuts reach it
+  const surface = useRef<HTMLElement>(null);
 
   const nodes = useMemo(
     () => toFlowNodes(document, selection, error, document.circuit.parameters),
@@ -202,6 +204,8 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
 
   return (
     <section
+      ref={surface}
+      tabIndex={-1}
       className="bench-canvas relative h-full min-h-0 w-full bg-paper outline-none"
       aria-label="Bench canvas"
       {...{ [CANVAS_ATTRIBUTE]: "" }}
@@ -226,7 +230,10 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
           const item = itemOfNodeId(node.id);
           if (item?.kind === "part") window.dispatchEvent(new CustomEvent(FOCUS_SHEET_EVENT));
         }}
-        onPaneClick={() => store.getState().clearSelection()}
+        onPaneClick={() => {
+          store.getState().clearSelection();
+          surface.current?.focus();
+        }}
         connectionMode={ConnectionMode.Loose}
         connectionLineType={ConnectionLineType.SmoothStep}
         snapToGrid
