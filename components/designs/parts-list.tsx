@@ -14,14 +14,14 @@ export function PartsList({ circuit }: { circuit: unknown }) {
         <p className="text-sm text-ink-soft">This circuit has no parts yet.</p>
       ) : (
         <div className="overflow-x-auto rounded-md border border-rule">
-          <table className="w-full min-w-[32rem] text-left text-sm">
+          <table className="w-full text-left text-sm sm:min-w-[32rem]">
             <caption className="sr-only">Parts and their values</caption>
             <thead className="bg-paper-deep text-xs uppercase tracking-wide text-ink-soft">
               <tr>
                 <th className="px-3 py-2 font-medium">Part</th>
                 <th className="px-3 py-2 font-medium">Kind</th>
                 <th className="px-3 py-2 font-medium">Values</th>
-                <th className="px-3 py-2 font-medium">Nets</th>
+                <th className="hidden px-3 py-2 font-medium sm:table-cell">Nets</th>
               </tr>
             </thead>
             <tbody>
@@ -32,12 +32,12 @@ export function PartsList({ circuit }: { circuit: unknown }) {
                     {part.enabled === false ? <span className="ml-2 font-sans text-xs">(switched off)</span> : null}
                   </td>
                   <td className="px-3 py-1.5">{text(part.kind)}</td>
-                  <td className="px-3 py-1.5 font-mono text-xs">
+                  <td className="break-words px-3 py-1.5 font-mono text-xs [overflow-wrap:anywhere]">
                     {Object.entries(isObject(part.values) ? part.values : {})
                       .map(([k, v]) => `${k} ${text(v)}`)
                       .join(" · ")}
                   </td>
-                  <td className="px-3 py-1.5 font-mono text-xs text-ink-soft">
+                  <td className="hidden px-3 py-1.5 font-mono text-xs text-ink-soft sm:table-cell">
                     {Object.values(isObject(part.pins) ? part.pins : {})
                       .map(text)
                       .join(", ")}

@@ -1,9 +1,10 @@
 import type { AcResult } from "@/sim";
 
 /** Drawing box of the plot in SVG units; the SVG scales to its container's width. */
-const W = 640;
-const H = 260;
-const PAD = { left: 48, right: 12, top: 12, bottom: 32 };
+// 520 wide keeps the 13-unit labels readable both at a phone's ~340 px and a desktop column's ~700 px.
+const W = 520;
+const H = 250;
+const PAD = { left: 44, right: 10, top: 14, bottom: 34 };
 const DECADES = [1, 10, 100, 1e3, 1e4, 1e5, 1e6];
 
 const hz = (f: number) => (f >= 1000 ? `${f / 1000}k` : String(f));
@@ -40,7 +41,7 @@ export function ResponsePlot({
   const y = (v: number) => PAD.top + ((hi - v) / (hi - lo)) * (H - PAD.top - PAD.bottom);
   const path = points.map((p, i) => `${i ? "L" : "M"}${x(p.f).toFixed(1)},${y(p.v).toFixed(1)}`).join("");
   const unit = quantity === "magnitude" ? "dB" : "°";
-  const ticks = Array.from({ length: 5 }, (_, i) => lo + ((hi - lo) * i) / 4);
+  const ticks = Array.from({ length: 4 }, (_, i) => lo + ((hi - lo) * i) / 3);
   return (
     <figure className="rounded-md border border-rule bg-paper p-2">
       <svg viewBox={`0 0 ${W} ${H}`} className="h-auto w-full" role="img" aria-label={label}>
@@ -48,7 +49,7 @@ export function ResponsePlot({
         {DECADES.filter((d) => Math.log10(d) >= f0 - 1e-9 && Math.log10(d) <= f1 + 1e-9).map((d) => (
           <g key={d}>
             <line x1={x(d)} x2={x(d)} y1={PAD.top} y2={H - PAD.bottom} className="stroke-rule" strokeWidth={1} />
-            <text x={x(d)} y={H - PAD.bottom + 16} textAnchor="middle" className="fill-ink-soft font-mono text-[11px]">
+            <text x={x(d)} y={H - PAD.bottom + 16} textAnchor="middle" className="fill-ink-soft font-mono text-[13px]">
               {hz(d)}
             </text>
           </g>
@@ -56,16 +57,16 @@ export function ResponsePlot({
         {ticks.map((t) => (
           <g key={t}>
             <line x1={PAD.left} x2={W - PAD.right} y1={y(t)} y2={y(t)} className="stroke-rule" strokeWidth={1} strokeDasharray="2 3" />
-            <text x={PAD.left - 6} y={y(t) + 4} textAnchor="end" className="fill-ink-soft font-mono text-[11px]">
+            <text x={PAD.left - 6} y={y(t) + 4} textAnchor="end" className="fill-ink-soft font-mono text-[13px]">
               {t.toFixed(0)}
             </text>
           </g>
         ))}
         <path d={path} fill="none" className="stroke-trace" strokeWidth={2} />
-        <text x={W - PAD.right} y={H - 4} textAnchor="end" className="fill-ink-soft text-[11px]">
+        <text x={W - PAD.right} y={H - 2} textAnchor="end" className="fill-ink-soft text-[12px]">
           Hz
         </text>
-        <text x={4} y={PAD.top + 8} className="fill-ink-soft text-[11px]">
+        <text x={2} y={PAD.top - 2} className="fill-ink-soft text-[12px]">
           {unit}
         </text>
       </svg>

@@ -36,7 +36,11 @@ export function SaveRevisionForm({ workspaceId, designId, headRevisionId }: { wo
       router.refresh();
     },
     onError: (error) => {
-      if (error instanceof DesignApiError && error.status === 409) setConflict((error.detail as HeadConflict) ?? null);
+      if (error instanceof DesignApiError && error.status === 409) {
+        setConflict((error.detail as HeadConflict) ?? null);
+        // Fetch the newer head into the history; the form's state (the draft) survives a refresh.
+        router.refresh();
+      }
     },
   });
   const submit = form.handleSubmit((values) => {
@@ -85,7 +89,7 @@ export function SaveRevisionForm({ workspaceId, designId, headRevisionId }: { wo
           {conflict ? (
             <span className="mt-1 block">
               r{conflict.headNumber} was saved by {conflict.authorName ?? "someone"} at {formatTime(conflict.savedAt)}. Your draft is still
-              in the box above: reload the page to see r{conflict.headNumber}, then save your draft on top of it, or fork.
+              in the box above. Look at r{conflict.headNumber} in the history; “Save revision” again puts your draft on top of it.
             </span>
           ) : null}
         </Notice>

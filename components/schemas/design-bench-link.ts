@@ -8,7 +8,7 @@ export const BENCH_PLOTS = ["response", "phase", "figures"] as const;
 export type BenchPlot = (typeof BENCH_PLOTS)[number];
 
 export const BENCH_PLOT_LABELS: Record<BenchPlot, string> = {
-  response: "Response (magnitude)",
+  response: "Magnitude",
   phase: "Phase",
   figures: "Figures only",
 };

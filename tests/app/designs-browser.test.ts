@@ -16,6 +16,12 @@ async function signIn(page: Page, email: string) {
   await page.waitForURL(`${baseUrl}/w/${DEMO_WORKSPACE.slug}`);
 }
 
+/** Full-page screenshots from the top, so the sticky header sits where it belongs. */
+async function shoot(page: Page, name: string) {
+  await page.evaluate(() => window.scrollTo(0, 0));
+  await page.screenshot({ path: screenshotPath(name), fullPage: true });
+}
+
 /** Nothing wider than the viewport (no sideways scrolling of the page itself). */
 async function expectNoOverflow(page: Page) {
   const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
@@ -47,10 +53,10 @@ describe("designs in Chromium", () => {
     await page.getByRole("heading", { level: 1, name: "Designs" }).waitFor();
     await page.getByRole("link", { name: DESIGN }).waitFor();
     await expect(page.getByRole("button", { name: "New design" }).count()).resolves.toBe(0);
-    await page.screenshot({ path: screenshotPath("designs-table-desktop"), fullPage: true });
+    await shoot(page, "designs-table-desktop");
     await page.setViewportSize(PHONE);
     await expectNoOverflow(page);
-    await page.screenshot({ path: screenshotPath("designs-table-phone"), fullPage: true });
+    await shoot(page, "designs-table-phone");
     await page.setViewportSize({ width: 1440, height: 900 });
 
     await openDesignFromTable(page);
@@ -77,7 +83,7 @@ describe("designs in Chromium", () => {
       return response.status;
     });
     expect(status).toBe(403);
-    await page.screenshot({ path: screenshotPath("design-page-reviewer-desktop"), fullPage: true });
+    await shoot(page, "design-page-reviewer-desktop");
     await page.close();
   });
 
@@ -101,10 +107,10 @@ describe("designs in Chromium", () => {
       const history = page.getByRole("list", { name: "Revisions, newest first" });
       await history.getByText("Source resistor to 3k3 from the browser").waitFor();
       await expect(history.getByRole("listitem").count()).resolves.toBe(before + 1);
-      await page.screenshot({ path: screenshotPath("design-page-desktop"), fullPage: true });
+      await shoot(page, "design-page-desktop");
       await page.setViewportSize(PHONE);
       await expectNoOverflow(page);
-      await page.screenshot({ path: screenshotPath("design-page-phone"), fullPage: true });
+      await shoot(page, "design-page-phone");
       await page.setViewportSize({ width: 1440, height: 900 });
 
       const links = page.getByRole("form", { name: "Make a bench link" });
@@ -137,10 +143,10 @@ describe("designs in Chromium", () => {
       await expect(page.getByRole("region", { name: "Parts" }).textContent()).resolves.toContain("RSRC");
       await page.getByRole("img", { name: /variant “pad”, 20–20000 Hz/ }).waitFor();
       await expect(page.getByTestId("signed-in-name").count()).resolves.toBe(0);
-      await page.screenshot({ path: screenshotPath("bench-link-desktop"), fullPage: true });
+      await shoot(page, "bench-link-desktop");
       await page.setViewportSize(PHONE);
       await expectNoOverflow(page);
-      await page.screenshot({ path: screenshotPath("bench-link-phone"), fullPage: true });
+      await shoot(page, "bench-link-phone");
       await page.close();
     } finally {
       await stranger.close();

@@ -36,7 +36,7 @@ export default async function BenchLinkPage({ params }: { params: Promise<{ toke
               Range: {view.fromHz ?? 1}–{view.toHz ?? 100000} Hz
             </li>
           ) : null}
-          <li className="rounded-full border border-rule px-2.5 py-0.5 text-ink-soft">Opened {opening.accessCount} times</li>
+          <li className="rounded-full border border-rule px-2.5 py-0.5 text-ink-soft">Opened {opening.accessCount} time{opening.accessCount === 1 ? "" : "s"}</li>
           {link.expiresAt ? <li className="rounded-full border border-rule px-2.5 py-0.5 text-ink-soft">Expires {link.expiresAt.toISOString().slice(0, 10)}</li> : null}
         </ul>
       </header>

@@ -6,8 +6,9 @@ import { can } from "@/components/auth/roles";
 import { BenchLinksPanel } from "@/components/designs/bench-links-panel";
 import { diffCircuits } from "@/components/designs/circuit-diff";
 import { CircuitDiffView } from "@/components/designs/circuit-diff-view";
-import { DesignActions } from "@/components/designs/design-actions";
+import { DesignActions, ForkPanel } from "@/components/designs/design-actions";
 import { formatTime } from "@/components/designs/format-time";
+import { Panel } from "@/components/designs/panel";
 import { RestoreRevisionButton } from "@/components/designs/restore-revision-button";
 import { RevisionReadout } from "@/components/designs/revision-readout";
 import { runRevision } from "@/components/designs/run-revision";
@@ -22,15 +23,6 @@ export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Design" };
 
 type Props = { params: Promise<{ slug: string; designId: string }>; searchParams: Promise<{ r?: string }> };
-
-function Panel({ title, children }: { title: string; children: React.ReactNode }) {
-  return (
-    <section aria-label={title} className="space-y-3 rounded-md border border-rule bg-paper p-4">
-      <h2 className="font-display text-base font-semibold">{title}</h2>
-      {children}
-    </section>
-  );
-}
 
 async function loadDesign(workspaceId: string, designId: string) {
   try {
@@ -142,7 +134,7 @@ export default async function DesignPage({ params, searchParams }: Props) {
               <SaveRevisionForm workspaceId={workspaceId} designId={designId} headRevisionId={design.headRevisionId} />
             </Panel>
           ) : null}
-          {can(role, "design.edit") || can(role, "design.delete") || can(role, "design.read") ? (
+          {can(role, "design.edit") || can(role, "design.delete") ? (
             <Panel title="Design">
               <DesignActions
                 workspaceId={workspaceId}
@@ -155,6 +147,7 @@ export default async function DesignPage({ params, searchParams }: Props) {
               />
             </Panel>
           ) : null}
+          {!deleted ? <ForkPanel workspaceId={workspaceId} designId={designId} /> : null}
           {can(role, "share.manage") && !deleted ? (
             <Panel title="Bench links">
               <BenchLinksPanel
