@@ -13,6 +13,8 @@ export const launcherConfig = {
   database: process.env.BACKPLATE_PG_DATABASE ?? "backplate",
   /** Port of the mail fake that `npm start` runs (the tests take a free port). */
   smtpPort: Number(process.env.BACKPLATE_SMTP_PORT ?? 2526),
+  /** Port of the storage fake that `npm start` runs (the tests take a free port). */
+  s3Port: Number(process.env.BACKPLATE_S3_PORT ?? 4569),
   /** Where the app listens. */
   host: process.env.HOST ?? "127.0.0.1",
   port: Number(process.env.PORT ?? 3000),

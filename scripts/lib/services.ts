@@ -1,7 +1,7 @@
 /**
- * Starts what the app needs beside itself — PostgreSQL and the mail fake (the storage fake joins here when it
- * arrives) — for `npm start` (a kept cluster and mail folder under .data/) and for the tests (a throwaway cluster and
- * mail folder on free ports).
+ * Starts what the app needs beside itself — PostgreSQL, the mail fake and the storage fake — for `npm start` (a kept
+ * cluster, mail and object folders under .data/) and for the tests (a throwaway cluster, mail and object folders on
+ * free ports).
  */
 import os from "node:os";
 import path from "node:path";
@@ -10,6 +10,7 @@ import { applyMigrations } from "../../db/migrate";
 import { launcherConfig, PROJECT_ROOT } from "./config";
 import { type MailFake, startMailFake } from "./mail-fake";
 import { type Cluster, destroyCluster, freePort, startCluster } from "./postgres";
+import { type S3Fake, startS3Fake } from "./s3-fake";
 
 export interface Services {
   databaseUrl: string;
@@ -18,6 +19,8 @@ export interface Services {
   /** Folder where the mail fake keeps what it receives (null when SMTP_URL names a real server). */
   mailDir: string | null;
   smtpPort: number | null;
+  /** The storage fake (null when S3_ENDPOINT names a real service). */
+  s3: S3Fake | null;
   /** Environment variables the app needs to reach these services. */
   env: Record<string, string>;
   stop(): Promise<void>;
@@ -33,13 +36,22 @@ export async function startDevServices(log: (line: string) => void): Promise<Ser
   await applyMigrations(cluster.url);
   log("Migrations applied");
   // A real server named in SMTP_URL wins; the fake runs only when none is.
+  let mail: MailFake | null = null;
   if (process.env.SMTP_URL) {
     log(`Mail goes to SMTP_URL (${new URL(process.env.SMTP_URL).host}); no mail fake`);
-    return wrap(cluster, null, false);
+  } else {
+    mail = await startMailFake({ port: launcherConfig.smtpPort, dir: path.join(PROJECT_ROOT, ".data", "mail") });
+    log(`Mail fake listening on 127.0.0.1:${mail.port}; captured mail at /dev/mail`);
   }
-  const mail = await startMailFake({ port: launcherConfig.smtpPort, dir: path.join(PROJECT_ROOT, ".data", "mail") });
-  log(`Mail fake listening on 127.0.0.1:${mail.port}; captured mail at /dev/mail`);
-  return wrap(cluster, mail, false);
+  // Likewise a real S3-compatible service named in S3_ENDPOINT wins over the storage fake.
+  let s3: S3Fake | null = null;
+  if (process.env.S3_ENDPOINT) {
+    log(`Files go to S3_ENDPOINT (${new URL(process.env.S3_ENDPOINT).host}); no storage fake`);
+  } else {
+    s3 = await startS3Fake({ port: launcherConfig.s3Port, dir: path.join(PROJECT_ROOT, ".data", "s3") });
+    log(`Storage fake listening on 127.0.0.1:${s3.port}; objects under .data/s3`);
+  }
+  return wrap(cluster, mail, s3, false);
 }
 
 /** A fresh cluster in the system temp folder, removed by `stop()`. */
@@ -55,7 +67,8 @@ export async function startTestServices(log: (line: string) => void = () => {}):
   });
   await applyMigrations(cluster.url);
   const mail = await startMailFake({ port: await freePort(), dir: path.join(dataDir, "mail") });
-  const services = wrap(cluster, mail, true);
+  const s3 = await startS3Fake({ port: await freePort(), dir: path.join(dataDir, "s3") });
+  const services = wrap(cluster, mail, s3, true);
   const stop = services.stop;
   services.stop = async () => {
     await stop();
@@ -67,7 +80,7 @@ export async function startTestServices(log: (line: string) => void = () => {}):
 /** Sender of Backplate's mail unless MAIL_FROM says otherwise. */
 export const DEFAULT_MAIL_FROM = "Backplate <bench@backplate.example>";
 
-function wrap(cluster: Cluster, mail: MailFake | null, throwaway: boolean): Services {
+function wrap(cluster: Cluster, mail: MailFake | null, s3: S3Fake | null, throwaway: boolean): Services {
   const mailEnv: Record<string, string> = mail
     ? { SMTP_URL: `smtp://127.0.0.1:${mail.port}`, BACKPLATE_MAIL_FAKE_DIR: mail.dir }
     : {};
@@ -77,9 +90,11 @@ function wrap(cluster: Cluster, mail: MailFake | null, throwaway: boolean): Serv
     pgPort: cluster.port,
     mailDir: mail?.dir ?? null,
     smtpPort: mail?.port ?? null,
-    env: { DATABASE_URL: cluster.url, ...mailEnv, MAIL_FROM: process.env.MAIL_FROM ?? DEFAULT_MAIL_FROM },
+    s3,
+    env: { DATABASE_URL: cluster.url, ...mailEnv, ...(s3?.env ?? {}), MAIL_FROM: process.env.MAIL_FROM ?? DEFAULT_MAIL_FROM },
     async stop() {
       await mail?.stop();
+      await s3?.stop();
       if (throwaway) destroyCluster(cluster.dataDir);
       else cluster.stop();
     },
