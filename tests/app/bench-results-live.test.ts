@@ -163,6 +163,7 @@ describe("bench live results in Chromium", () => {
   it(`updates the plots within ${UPDATE_TARGET_MS} ms of a value change (median of ${CHANGES_MEASURED})`, async () => {
     await page.evaluate(() => {
       window.__benchUpdateDurations = [];
+      window.__benchSolveDurations = [];
     });
     // each value differs from the one before it, so every change re-solves
     const values = ["3k3", "3k6", "4k7", "5k6", "6k8"];
@@ -172,13 +173,19 @@ describe("bench live results in Chromium", () => {
         .poll(() => page.evaluate(() => window.__benchUpdateDurations?.length ?? 0), { timeout: 10_000 })
         .toBe(i + 1);
     }
-    const durations = await page.evaluate(() => window.__benchUpdateDurations ?? []);
-    const sorted = [...durations].sort((a, b) => a - b);
-    const median = (sorted[9] + sorted[10]) / 2;
+    const { updates, solves } = await page.evaluate(() => ({
+      updates: window.__benchUpdateDurations ?? [],
+      solves: window.__benchSolveDurations ?? [],
+    }));
+    const median = (values: number[]) => {
+      const sorted = [...values].sort((x, y) => x - y);
+      return (sorted[sorted.length / 2 - 1] + sorted[sorted.length / 2]) / 2;
+    };
     console.log(
-      `bench update: median ${median.toFixed(1)} ms over ${durations.length} changes; all ${sorted.map((d) => d.toFixed(1)).join(", ")}`,
+      `bench update (change → plot drawn): median ${median(updates).toFixed(1)} ms; solver part (change → result on the page): median ${median(solves.slice(-CHANGES_MEASURED)).toFixed(1)} ms; all updates ${updates.map((d) => d.toFixed(1)).join(", ")}`,
     );
-    expect(median).toBeLessThan(UPDATE_TARGET_MS);
+    expect(updates).toHaveLength(CHANGES_MEASURED);
+    expect(median(updates)).toBeLessThan(UPDATE_TARGET_MS);
   });
 
   it("lays out cleanly on a phone (read-only use): nothing wider than the screen", async () => {
@@ -186,10 +193,11 @@ describe("bench live results in Chromium", () => {
     await phone.setViewportSize({ width: 390, height: 844 });
     await phone.goto(`${baseUrl}/w/larkfield/designs/${seeded.designId}/bench`);
     await readyResults(phone);
-    await phone.getByTestId("bench-results").scrollIntoViewIfNeeded();
+    await phone.locator('[data-testid="plot-bode"] .js-plotly-plot').waitFor();
+    await expect.poll(() => bodeTraceCount(phone)).toBe(2);
     const overflow = await phone.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow).toBeLessThanOrEqual(0);
-    await phone.getByTestId("bench-results").screenshot({ path: screenshotPath("bench-results-phone") });
+    await phone.screenshot({ path: screenshotPath("bench-results-phone"), fullPage: true });
     await phone.close();
   });
 });
