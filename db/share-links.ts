@@ -47,6 +47,16 @@ const summaryColumns = {
   createdAt: shareLinks.createdAt,
 };
 
+/** A view may only name a variant the circuit has, so the link never opens on an engine error. */
+function checkViewVariant(circuit: Record<string, unknown>, variant: string | undefined): void {
+  if (!variant) return;
+  const names = (Array.isArray(circuit.variants) ? circuit.variants : []).map((v: { name?: unknown }) => String(v?.name ?? ""));
+  if (!names.includes(variant)) {
+    const known = names.length ? `Its variants are ${names.map((n) => `“${n}”`).join(", ")}.` : "It has no variants.";
+    throw new AppError("invalid_input", `The revision has no variant “${variant}”. ${known}`, { fields: { "view.variant": "No such variant." } });
+  }
+}
+
 /** Creates a bench link; the token is returned this once and only its hash is stored. */
 export async function createShareLink(
   workspaceId: string,
@@ -54,8 +64,9 @@ export async function createShareLink(
   actorId: string,
   input: CreateBenchLinkInput & { view: BenchView },
 ): Promise<{ token: string; link: ShareLinkSummary }> {
-  await getDesign(workspaceId, designId);
-  if (input.revisionId) await getRevision(workspaceId, designId, input.revisionId);
+  const design = await getDesign(workspaceId, designId);
+  const revision = await getRevision(workspaceId, designId, input.revisionId ?? design.headRevisionId ?? "");
+  checkViewVariant(revision.circuit, input.view.variant);
   const token = newShareToken();
   const id = await getDb().transaction(async (tx) => {
     const [row] = await tx

@@ -78,6 +78,15 @@ describe("bench links", () => {
     expect((await failure(findShareLink(token))).status).toBe(410);
   });
 
+  it("refuses a view naming a variant the circuit does not have (422), and stores no link", async () => {
+    const { designId } = await createDesign(ws, owner, { title: "Variants", circuit: demoCircuit() });
+    const wrong = benchViewSchema.parse({ plot: "response", variant: "louder" });
+    const error = await failure(createShareLink(ws, designId, owner, { view: wrong }));
+    expect(error.status).toBe(422);
+    expect(error.message).toMatch(/“hotter bias”, “pad”/);
+    expect(await listShareLinks(ws, designId)).toEqual([]);
+  });
+
   it("refuses a revision of another design and a design of another workspace (404)", async () => {
     const a = await createDesign(ws, owner, { title: "A", circuit: demoCircuit() });
     const b = await createDesign(ws, owner, { title: "B", circuit: demoCircuit() });
