@@ -24,6 +24,8 @@ export default defineConfig({
           name: "unit",
           include: ["sim/**/*.test.ts", "components/**/*.test.{ts,tsx}", "tests/unit/**/*.test.{ts,tsx}"],
           environment: "node",
+          // Property tests solve hundreds of circuits; on a loaded 2-core machine that can pass 5 s.
+          testTimeout: 60_000,
         },
       },
       {
