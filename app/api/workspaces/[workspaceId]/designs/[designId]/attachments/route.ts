@@ -1,0 +1,34 @@
+import { MAX_ATTACHMENT_BYTES, sniffAttachmentType } from "@/app/_server/attachment-types";
+import { readUpload } from "@/app/_server/read-upload";
+import { route } from "@/app/_server/respond";
+import { storageKey, storeThenRecord } from "@/app/_server/store-then-record";
+import { assertReviewOfDesign, insertAttachment, listAttachments } from "@/db/attachments";
+import { getDesign } from "@/db/designs";
+import { access, type Params } from "../../_access";
+
+export const dynamic = "force-dynamic";
+
+export const GET = route<Params<"designId">>(async (request, { params }) => {
+  const { workspaceId, designId } = await params;
+  await access(workspaceId, "design.read");
+  const reviewId = new URL(request.url).searchParams.get("reviewId") ?? undefined;
+  const rows = await listAttachments(workspaceId, designId, reviewId);
+  return Response.json({ attachments: rows.map(({ storageKey: _key, ...rest }) => rest) });
+});
+
+/** Upload a photo, PDF or text file (≤ 20 MB), optionally to a review of the design (`reviewId`). */
+export const POST = route<Params<"designId">>(async (request, { params }) => {
+  const { workspaceId, designId } = await params;
+  const { user } = await access(workspaceId, "review.remark");
+  await getDesign(workspaceId, designId);
+  const upload = await readUpload(request, MAX_ATTACHMENT_BYTES, "attachment");
+  const filename = (upload.file.name || "attachment").slice(0, 200);
+  const contentType = sniffAttachmentType(upload.bytes, filename);
+  const reviewId = upload.fields.reviewId || null;
+  if (reviewId) await assertReviewOfDesign(designId, reviewId);
+  const key = storageKey(designId, "attachments", filename);
+  const row = await storeThenRecord(key, upload.bytes, contentType, () =>
+    insertAttachment({ workspaceId, designId, reviewId, storageKey: key, filename, contentType, sizeBytes: upload.bytes.byteLength, uploadedBy: user.id, action: "attachment.upload" }),
+  );
+  return Response.json({ attachment: { id: row.id, filename, contentType } }, { status: 201 });
+});
