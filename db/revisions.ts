@@ -5,6 +5,8 @@ import { getDb } from "./client";
 import { assertId, getDesign, lockDesign } from "./designs";
 import { checkCircuit } from "./designs-circuit";
 import { AppError } from "./errors";
+import { storeRevisionChecks } from "./revision-checks";
+import { notifyRevisionUnderReview } from "./reviews";
 import { designRevisions, designs, users } from "./schema";
 
 export interface RevisionSummary {
@@ -92,7 +94,7 @@ export async function saveRevision(
   audit: { restoredFrom?: { id: string; number: number } } = {},
 ): Promise<RevisionSummary> {
   const circuit = checkCircuit(values.circuit);
-  return getDb().transaction(async (tx) => {
+  const saved = await getDb().transaction(async (tx) => {
     const design = await lockDesign(tx, workspaceId, designId);
     const headRows = design.headRevisionId
       ? await tx
@@ -127,9 +129,13 @@ export async function saveRevision(
       targetId: revision.id,
       detail: { designId, number, message: values.message, ...(audit.restoredFrom ? { restoredFrom: audit.restoredFrom } : {}) },
     });
+    await notifyRevisionUnderReview(tx, { designId, actorId, number, message: values.message });
     const [author] = await tx.select({ name: users.name }).from(users).where(eq(users.id, actorId));
     return { ...revision, authorName: author?.name ?? null } as RevisionSummary;
   });
+  // after the commit: the engine's figures and target checks (the review issue); a save never fails on them
+  await storeRevisionChecks(saved.id, circuit).catch((error) => console.error("revision checks:", error));
+  return saved;
 }
 
 /** Restoring an old revision saves its circuit again as a new revision on top of the head; history is never rewritten. */
