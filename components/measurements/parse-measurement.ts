@@ -74,7 +74,7 @@ export function guessMapping(table: MeasurementTable, fileName: string): Omit<Me
   const header = table.columns.map((c) => c.toLowerCase());
   const find = (re: RegExp) => header.findIndex((h) => re.test(h));
   const f = find(/freq|hz/);
-  const frequencyColumn = f >= 0 ? f : 0;
+  const frequencyColumn = Math.max(f, 0);
   const p = find(/phase|deg/);
   const l = header.findIndex((h, i) => i !== frequencyColumn && i !== p && /db|level|mag|spl|v/.test(h));
   const levelColumn = l >= 0 ? l : frequencyColumn === 0 ? 1 : 0;

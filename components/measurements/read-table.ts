@@ -38,7 +38,7 @@ export function looksBinary(bytes: Uint8Array): boolean {
 
 /** A sample cut mid-character would fail UTF-8 decoding; drop a trailing partial sequence (at most 3 bytes). */
 function trimPartial(sample: Uint8Array): Uint8Array {
-  let end = sample.length;
+  const end = sample.length;
   for (let back = 1; back <= 3 && end - back >= 0; back++) {
     const byte = sample[end - back];
     if ((byte & 0xc0) === 0xc0) return sample.subarray(0, end - back);
