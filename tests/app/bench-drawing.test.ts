@@ -85,7 +85,7 @@ describe("drawing on the bench", () => {
     await dropFromTray(page, "capsule", 100, 160);
     await dropFromTray(page, "jfet", 340, 120);
     await dropFromTray(page, "resistor", 200, 340);
-    await dropFromTray(page, "vsource", 580, 20);
+    await dropFromTray(page, "vsource", 580, 60);
     await dropFromTray(page, "load", 580, 300);
     await dropFromTray(page, "ground", 140, 500);
     for (const id of ["MIC1", "J1", "R1", "V1", "IN1"]) await page.getByTestId(`part-${id}`).waitFor();

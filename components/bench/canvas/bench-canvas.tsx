@@ -256,7 +256,7 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
       {netError && (
         <div
           role="alert"
-          className="absolute left-3 right-3 top-3 z-10 rounded border border-caution bg-caution-bg px-3 py-2 text-sm text-caution"
+          className="pointer-events-none absolute bottom-12 left-3 right-16 z-10 rounded border border-caution bg-caution-bg px-3 py-2 text-sm text-caution"
         >
           <span className="font-mono">Net {netError.net}:</span> {netError.message}
         </div>

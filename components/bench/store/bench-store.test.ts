@@ -174,3 +174,13 @@ describe("replacing the document", () => {
     expect(store.getState().document).toBe(before);
   });
 });
+
+describe("no-op edits", () => {
+  it("setting a value to what it already is records no undo step (a blur after Enter)", () => {
+    const { store } = drawDivider();
+    store.getState().setValue("R1", "resistance", "4k7");
+    const steps = store.getState().history.past.length;
+    store.getState().setValue("R1", "resistance", "4k7");
+    expect(store.getState().history.past.length).toBe(steps);
+  });
+});

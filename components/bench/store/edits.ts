@@ -153,14 +153,17 @@ export function disconnect(document: BenchDocument, wireIds: string[]): BenchDoc
   });
 }
 
+/** Applies `change` to one part; an unchanged part (same content) leaves the document as it is, so no undo step. */
 function mapPart(document: BenchDocument, id: string, change: (part: BenchPart) => BenchPart): BenchDocument {
-  let found = false;
+  let changed = false;
   const parts = document.circuit.parts.map((p) => {
     if (p.id !== id) return p;
-    found = true;
-    return change(p);
+    const next = change(p);
+    if (JSON.stringify(next) === JSON.stringify(p)) return p;
+    changed = true;
+    return next;
   });
-  return found ? { ...document, circuit: { ...document.circuit, parts } } : document;
+  return changed ? { ...document, circuit: { ...document.circuit, parts } } : document;
 }
 
 /** Sets (or, with `undefined`, removes, so the contract's default applies) one value of a part, as written. */
