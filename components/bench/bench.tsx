@@ -6,11 +6,12 @@
  * stay (read-only use).
  */
 import { ReactFlowProvider } from "@xyflow/react";
-import { useMemo, useState } from "react";
+import { Suspense, useMemo, useState } from "react";
 import { designsFetch, designUrl } from "@/components/designs/designs-api";
 import { BenchTopBar } from "./bench-top-bar";
 import { BenchCanvas } from "./canvas/bench-canvas";
 import { CautionBanner } from "./caution-banner";
+import { ReviewAnchor } from "./review-anchor";
 import { type BenchDocument, openDocument, toExportFile } from "./document/document";
 import { importCircuitText } from "./document/import-file";
 import type { SimErrorJson } from "@/sim/errors";
@@ -37,6 +38,9 @@ export function Bench(props: BenchProps) {
   return (
     <ReactFlowProvider>
       <BenchStoreProvider document={document} readOnly={props.readOnly}>
+        <Suspense fallback={null}>
+          <ReviewAnchor />
+        </Suspense>
         <BenchBody {...props} />
       </BenchStoreProvider>
     </ReactFlowProvider>

@@ -13,6 +13,9 @@ export interface DesignRow {
   updatedAt: string;
   createdAt: string;
   deletedAt: string | null;
+  /** the head revision's target checks: true all met, false some missed, null no targets, absent not computed */
+  checksAllPass?: boolean | null;
+  checksMissed?: number;
 }
 
 export interface DesignListResponse {

@@ -10,6 +10,7 @@ import type { DesignListResponse, DesignRow } from "./design-types";
 import { designsFetch, designsUrl, designUrl } from "./designs-api";
 import { formatTime } from "./format-time";
 import { StatusBadge } from "./status-badge";
+import { TargetsCell } from "./targets-cell";
 
 const PAGE_SIZE = 10;
 /** Wait this long after the last keystroke before searching, so typing does not send a request per letter. */
@@ -80,6 +81,7 @@ export function DesignsTable({ workspaceId, slug, canRestore }: { workspaceId: s
           ),
       },
       { id: "status", header: "Status", accessorKey: "status", cell: ({ row }) => <StatusBadge status={row.original.status} /> },
+      { id: "targets", header: "Targets", enableSorting: false, cell: ({ row }) => <TargetsCell row={row.original} /> },
       {
         id: "head",
         header: "Latest revision",

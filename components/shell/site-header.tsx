@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { BackplateMark } from "@/components/brand/backplate-mark";
+import { InboxLink } from "@/components/inbox/inbox-link";
 import { HeaderNav, type HeaderUser } from "./header-nav";
 
 /** The header. `serverUser` is the layout's reading of the session cookie, so the first paint is already right. */
@@ -12,6 +13,7 @@ export function SiteHeader({ serverUser }: { serverUser: HeaderUser | null }) {
           <span className="font-display text-lg font-bold tracking-tight">Backplate</span>
         </Link>
         <HeaderNav serverUser={serverUser} />
+        {serverUser ? <InboxLink /> : null}
       </div>
     </header>
   );

@@ -1,6 +1,7 @@
 import { readJson, route } from "@/app/_server/respond";
 import { createDesignSchema, listDesignsQuerySchema } from "@/components/schemas/design";
 import { createDesign, getDesign, listDesignAuthors, listDesigns } from "@/db/designs";
+import { checksByRevision } from "@/db/revision-checks";
 import { access, type Params, SAVE_BODY_LIMIT_BYTES } from "./_access";
 
 export const dynamic = "force-dynamic";
@@ -11,7 +12,13 @@ export const GET = route<Params>(async (request, { params }) => {
   await access(workspaceId, "design.read");
   const query = listDesignsQuerySchema.parse(Object.fromEntries(new URL(request.url).searchParams));
   const [page, authors] = await Promise.all([listDesigns(workspaceId, query), listDesignAuthors(workspaceId)]);
-  return Response.json({ ...page, authors });
+  // the head revision's target checks, for the table's Targets column (absent: not computed yet)
+  const checks = await checksByRevision(page.rows.flatMap((row) => (row.headRevisionId ? [row.headRevisionId] : [])));
+  const rows = page.rows.map((row) => {
+    const c = row.headRevisionId ? checks.get(row.headRevisionId) : undefined;
+    return { ...row, checksAllPass: c ? c.allPass : undefined, checksMissed: c ? c.checks.filter((k) => !k.pass).length : undefined };
+  });
+  return Response.json({ ...page, rows, authors });
 });
 
 /** A new design: { title, description?, circuit? (omitted: the empty starting circuit), message? } */

@@ -18,6 +18,7 @@ import { getDesign } from "@/db/designs";
 import { AppError } from "@/db/errors";
 import { getMembershipBySlug } from "@/db/memberships";
 import { getRevision, listRevisions } from "@/db/revisions";
+import { DesignReviewPanels } from "./design-review-panels";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Design" };
@@ -123,6 +124,9 @@ export default async function DesignPage({ params, searchParams }: Props) {
                 ))}
               </ol>
             </Panel>
+          ) : null}
+          {head && !deleted ? (
+            <DesignReviewPanels slug={slug} membership={membership} designId={designId} head={head} revisions={revisions} variants={variants} />
           ) : null}
           {selected ? (
             <Panel title={`What changed in r${selected.number}`}>

@@ -9,6 +9,7 @@ import { getDesign } from "@/db/designs";
 import { AppError } from "@/db/errors";
 import { getMembershipBySlug } from "@/db/memberships";
 import { getRevision } from "@/db/revisions";
+import { BenchChecks } from "./bench-checks";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Bench" };
@@ -42,6 +43,7 @@ export default async function BenchPage({ params }: Props) {
             {design.title}
           </Link>{" "}
           · Bench
+          {head ? <BenchChecks revisionId={head.id} designPath={`/w/${slug}/designs/${designId}`} /> : null}
         </nav>
         <Bench
           circuit={head?.circuit ?? emptyCircuit(design.title)}
