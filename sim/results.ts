@@ -60,12 +60,50 @@ export interface Figures {
   [figure: string]: number | string | null | undefined | Record<string, unknown>;
 }
 
+/** The `transient` analysis (contract): every accepted time point, s; V(plus) − V(minus), V; probed nets, V. */
+export interface TransientResult {
+  time: number[];
+  output: number[];
+  nets: Record<string, number[]>;
+  /** each capsule's polarisation V(diaphragm) − V(backplate) + electret_voltage against time, V */
+  polarisation?: Record<string, number[]>;
+  warnings?: SimWarning[];
+}
+
+/** One level of the `distortion` analysis (contract): `spl_db` or `level`, fundamental in peak volts. */
+export interface DistortionPoint {
+  spl_db?: number;
+  level?: number;
+  fundamental: number;
+  /** harmonics 2 … 10 relative to the fundamental, dB */
+  harmonics_db: number[];
+  thd_percent: number;
+  /** this level's warnings: a capsule gap closing, a waveform that did not settle */
+  warnings?: SimWarning[];
+}
+
+/** The `ripple` analysis (contract): 20·log10 |Vout/Vsupply| at each frequency. */
+export interface RippleResult {
+  frequency: number[];
+  rejection_db: number[];
+  warnings?: SimWarning[];
+}
+
+/** Which device leaves its region first at max_spl_db, and how. */
+export interface LimitedBy {
+  part: string;
+  reason: string;
+}
+
 /** What `simulate` returns for one elaborated circuit. Keys of analyses that did not run are absent. */
 export interface SimulationResult {
   op?: OpResult;
   ac?: AcResult;
   noise?: NoiseResult;
   figures: Figures;
+  transient?: TransientResult;
+  distortion?: DistortionPoint[];
+  ripple?: RippleResult;
   /** Monte Carlo over the tolerances, when `analyses.spread` asks for it */
   spread?: SpreadResult;
 }

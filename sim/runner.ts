@@ -40,6 +40,9 @@ export function runWith(simulate: Simulate, file: unknown, options: RunOptions =
     ...(result.op && { op: result.op }),
     ...(result.ac && { ac: result.ac }),
     ...(result.noise && { noise: result.noise }),
+    ...(result.transient && { transient: result.transient }),
+    ...(result.distortion && { distortion: result.distortion }),
+    ...(result.ripple && { ripple: result.ripple }),
     figures: result.figures,
   };
   if (sweep) {

@@ -21,6 +21,8 @@ import { selfNoiseDbaSpl } from "./noise-figures";
 import { type OperatingPoint, OperatingPointSolver, reportOperatingPoint } from "./op";
 import { SmallSignalModel } from "./small-signal";
 import { runSpread } from "./spread";
+import type { RunControl } from "./transient";
+import { solveLargeSignal } from "./transient-large-signal";
 
 /** Contract: capsules are driven at 1 Pa unless the ac analysis says otherwise. */
 export const DEFAULT_PRESSURE_PA = 1;
@@ -38,6 +40,11 @@ export interface SolveOptions {
   reportOp: boolean;
   /** start every operating point from this solution (a Monte Carlo run starts from the nominal one) */
   warmStart?: Float64Array;
+  /**
+   * run transient, distortion and ripple when asked (the nominal pass; a Monte Carlo run repeats the small-signal
+   * analyses only), with a Web Worker's progress callback and cancellation check
+   */
+  largeSignal?: RunControl;
 }
 
 /** One pass of the requested analyses on a compiled circuit with the values its parts hold now. */
@@ -66,7 +73,8 @@ export function solveAnalyses(
   const model = new SmallSignalModel(compiled, nominal);
   const pressure = analyses.ac?.pressure ?? DEFAULT_PRESSURE_PA;
   if (analyses.ac) result.ac = runAc(model, expandFrequencies(analyses.ac.frequencies), pressure);
-  result.figures = computeFigures(model, pressure);
+  // The sweep just solved brackets the corners (corners.ts): far fewer single-frequency solves than a search.
+  result.figures = computeFigures(model, pressure, result.ac);
   if (analyses.noise) {
     const adjoint = new AdjointNoiseSystem(compiled, operatingPointAt(analyses.noise.temperature));
     result.noise = runNoise(adjoint, expandFrequencies(analyses.noise.frequencies));
@@ -75,14 +83,15 @@ export function solveAnalyses(
       result.figures.sensitivity_v_per_pa,
     );
   }
+  if (options.largeSignal) solveLargeSignal(compiled, operatingPointAt, analyses, result, options.largeSignal);
   return { result, nominal };
 }
 
-export function simulate(circuit: ElaboratedCircuit): SimulationResult {
+export function simulate(circuit: ElaboratedCircuit, control: RunControl = {}): SimulationResult {
   const compiled = compileCircuit(circuit);
   const solver = new OperatingPointSolver(compiled);
   const { spread, ...analyses } = circuit.analyses;
-  const { result, nominal } = solveAnalyses(compiled, solver, analyses, { reportOp: true });
+  const { result, nominal } = solveAnalyses(compiled, solver, analyses, { reportOp: true, largeSignal: control });
   if (spread) {
     result.spread = runSpread(
       compiled,

@@ -10,7 +10,15 @@ import type { NumericRange } from "./kinds";
 import { QUANTITIES, type QuantityName } from "./quantities";
 import { checkRange } from "./ranges";
 import type { CircuitFile } from "./schema";
-import { type AnalysisRequests, DEFAULT_TEMPERATURE_K, type FrequencyRequest, type LogGrid } from "./types";
+import {
+  type AnalysisRequests,
+  DEFAULT_TEMPERATURE_K,
+  type DistortionRequest,
+  type DriveRequest,
+  type FrequencyRequest,
+  type LogGrid,
+  type TransientRequest,
+} from "./types";
 
 export const DEFAULT_AC_GRID: LogGrid = { from: 1, to: 100_000, pointsPerDecade: 20 };
 export const DEFAULT_NOISE_GRID: LogGrid = { from: 20, to: 20_000, pointsPerDecade: 20 };
@@ -141,8 +149,119 @@ export function elaborateAnalyses(analyses: CircuitFile["analyses"], scope: Scop
     requests.sweep = { parameter: asked.sweep.parameter, values };
   }
   if (asked.spread) requests.spread = { runs: asked.spread.runs, seed: asked.spread.seed };
-  if (asked.transient) requests.transient = asked.transient;
-  if (asked.distortion) requests.distortion = asked.distortion;
-  if (asked.ripple) requests.ripple = asked.ripple;
+  if (asked.transient) requests.transient = transientRequest(asked.transient, scope);
+  if (asked.distortion) requests.distortion = distortionRequest(asked.distortion, scope);
+  if (asked.ripple) {
+    requests.ripple = {
+      frequencies: frequencyRequest(asked.ripple as RawFrequencyFields, DEFAULT_AC_GRID, "ripple", scope),
+      temperature: temperature(asked.ripple.temperature as RawValue, "ripple", scope),
+    };
+    onlyKeys(asked.ripple, ["frequencies", "from", "to", "points_per_decade", "temperature"], "analyses.ripple");
+  }
   return requests;
+}
+
+/* ---- large-signal requests (contract, "Large-signal analyses") ---- */
+
+/** More time steps than this (stop / step) is a mistake, not a waveform. */
+export const MAX_TRANSIENT_STEPS = 10_000_000;
+/** More distortion levels than this in one analysis. */
+export const MAX_DISTORTION_LEVELS = 200;
+/** Longest burst, in periods. */
+export const MAX_BURST_CYCLES = 100_000;
+
+const POSITIVE: NumericRange = { min: 0, minExclusive: true };
+
+function invalid(field: string, message: string): SimError {
+  return new SimError("invalid_analysis", `${field}: ${message}`, { field });
+}
+
+function onlyKeys(raw: Record<string, unknown>, allowed: readonly string[], label: string): void {
+  for (const key of Object.keys(raw)) {
+    if (!allowed.includes(key)) {
+      throw invalid(`${label}.${key}`, `unknown field; the fields are ${allowed.map((k) => `"${k}"`).join(", ")}.`);
+    }
+  }
+}
+
+function rawValue(raw: unknown, field: string): RawValue {
+  if (raw === undefined || typeof raw === "number" || typeof raw === "string") return raw;
+  throw invalid(field, "give a number or a string value.");
+}
+
+function required(raw: unknown, field: string, quantity: QuantityName, range: NumericRange, scope: Scope): number {
+  const v = rawValue(raw, field);
+  if (v === undefined) throw invalid(field, "is required.");
+  return value(v, Number.NaN, quantity, range, field, scope);
+}
+
+function valueList(raw: unknown, field: string, quantity: QuantityName, scope: Scope): number[] {
+  if (!Array.isArray(raw) || raw.length === 0) throw invalid(field, "give a non-empty list of values.");
+  if (raw.length > MAX_DISTORTION_LEVELS) throw invalid(field, `at most ${MAX_DISTORTION_LEVELS} values.`);
+  return raw.map((item, i) => required(item, `${field}[${i}]`, quantity, {}, scope));
+}
+
+function driveRequest(raw: unknown, label: string, scope: Scope): DriveRequest {
+  if (raw === null || typeof raw !== "object" || Array.isArray(raw)) {
+    throw invalid(label, 'give an object such as { "shape": "sine", "frequency": 1000, "spl_db": 94 }.');
+  }
+  const r = raw as Record<string, unknown>;
+  onlyKeys(r, ["shape", "frequency", "spl_db", "level", "cycles"], label);
+  const shape = r.shape ?? "sine";
+  if (shape !== "sine" && shape !== "burst") throw invalid(`${label}.shape`, 'is "sine" or "burst".');
+  const frequency = required(r.frequency, `${label}.frequency`, "frequency", POSITIVE, scope);
+  if ((r.spl_db === undefined) === (r.level === undefined)) {
+    throw invalid(label, 'give exactly one of "spl_db" (drives the capsules) and "level" (drives the input sources).');
+  }
+  const drive: DriveRequest = { shape, frequency };
+  if (r.spl_db !== undefined) drive.splDb = required(r.spl_db, `${label}.spl_db`, "dimensionless", {}, scope);
+  else drive.level = required(r.level, `${label}.level`, "dimensionless", {}, scope);
+  if (shape === "burst") {
+    drive.cycles = required(r.cycles, `${label}.cycles`, "count", { min: 1, max: MAX_BURST_CYCLES, integer: true }, scope);
+  } else if (r.cycles !== undefined) {
+    throw invalid(`${label}.cycles`, 'applies to a "burst" only; remove it or set "shape": "burst".');
+  }
+  return drive;
+}
+
+function transientRequest(raw: Record<string, unknown>, scope: Scope): TransientRequest {
+  const label = "analyses.transient";
+  onlyKeys(raw, ["stop", "step", "from", "drive", "probe", "temperature"], label);
+  const stop = required(raw.stop, `${label}.stop`, "any", POSITIVE, scope);
+  const step = required(raw.step, `${label}.step`, "any", POSITIVE, scope);
+  if (step > stop) throw invalid(`${label}.step`, `the largest step (${step} s) is longer than stop (${stop} s).`);
+  if (stop / step > MAX_TRANSIENT_STEPS) {
+    throw invalid(`${label}.step`, `stop / step is more than ${MAX_TRANSIENT_STEPS} steps; use a longer step.`);
+  }
+  const from = raw.from ?? "op";
+  if (from !== "op" && from !== "power-on") throw invalid(`${label}.from`, 'is "op" (default) or "power-on".');
+  const probe = raw.probe ?? [];
+  if (!Array.isArray(probe) || probe.some((n) => typeof n !== "string")) {
+    throw invalid(`${label}.probe`, 'give a list of net names, such as ["out", "g"].');
+  }
+  const request: TransientRequest = {
+    stop,
+    step,
+    from,
+    probe: probe as string[],
+    temperature: temperature(rawValue(raw.temperature, `${label}.temperature`), "transient", scope),
+  };
+  if (raw.drive !== undefined) request.drive = driveRequest(raw.drive, `${label}.drive`, scope);
+  return request;
+}
+
+function distortionRequest(raw: Record<string, unknown>, scope: Scope): DistortionRequest {
+  const label = "analyses.distortion";
+  onlyKeys(raw, ["frequency", "spl_db", "levels", "temperature"], label);
+  const frequency = required(raw.frequency, `${label}.frequency`, "frequency", POSITIVE, scope);
+  if ((raw.spl_db === undefined) === (raw.levels === undefined)) {
+    throw invalid(label, 'give exactly one of "spl_db": [...] (capsule drive) and "levels": [...] (input sources).');
+  }
+  const request: DistortionRequest = {
+    frequency,
+    temperature: temperature(rawValue(raw.temperature, `${label}.temperature`), "distortion", scope),
+  };
+  if (raw.spl_db !== undefined) request.splDb = valueList(raw.spl_db, `${label}.spl_db`, "dimensionless", scope);
+  else request.levels = valueList(raw.levels, `${label}.levels`, "dimensionless", scope);
+  return request;
 }

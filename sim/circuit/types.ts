@@ -68,10 +68,43 @@ export interface AnalysisRequests {
   noise?: { frequencies: FrequencyRequest; temperature: number };
   sweep?: { parameter: string; values: number[] };
   spread?: { runs: number; seed: number };
-  /** Large-signal analyses (later issue); kept raw until their engine exists. */
-  transient?: Record<string, unknown>;
-  distortion?: Record<string, unknown>;
-  ripple?: Record<string, unknown>;
+  /** Large-signal analyses (contract, "Large-signal analyses"); times in s. */
+  transient?: TransientRequest;
+  distortion?: DistortionRequest;
+  ripple?: { frequencies: FrequencyRequest; temperature: number };
+}
+
+/** A drive of the large-signal analyses: exactly one of `splDb` (capsules) and `level` (input sources). */
+export interface DriveRequest {
+  shape: "sine" | "burst";
+  /** Hz */
+  frequency: number;
+  /** dB SPL re 20 µPa */
+  splDb?: number;
+  level?: number;
+  /** whole periods of a burst */
+  cycles?: number;
+}
+
+export interface TransientRequest {
+  /** s */
+  stop: number;
+  /** largest step allowed, s */
+  step: number;
+  from: "op" | "power-on";
+  drive?: DriveRequest;
+  /** nets whose waveforms are reported */
+  probe: string[];
+  temperature: number;
+}
+
+/** Exactly one of `splDb` and `levels` is present. */
+export interface DistortionRequest {
+  /** Hz */
+  frequency: number;
+  splDb?: number[];
+  levels?: number[];
+  temperature: number;
 }
 
 export interface Target {

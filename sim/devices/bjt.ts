@@ -18,6 +18,8 @@ import {
   type DeviceWiring,
   numberValue,
   type OperatingPointView,
+  type RegionMargin,
+  type TransientStampContext,
 } from "./device";
 import { type BjtParameters, type BjtPoint, bjtCurrents } from "./bjt-model";
 import { criticalJunctionVoltage, limitJunctionVoltage } from "./limiting";
@@ -135,6 +137,26 @@ class Bjt implements Device {
     this.linearise(limitedVbe, limitedVbc, vt, ctx.x);
     this.block.stampDc(ctx);
     this.stampBase(ctx.add);
+  }
+  /** stored quantities: the charges of cpi and cmu */
+  transientStateCount(): number {
+    return 2;
+  }
+  stampTransient(ctx: TransientStampContext): void {
+    this.stampDc(ctx);
+    ctx.capacitance(0, this.cpi, this.innerBase, this.emitter, numberValue(this.part, "cpi"));
+    ctx.capacitance(1, this.cmu, this.innerBase, this.collector, numberValue(this.part, "cmu"));
+  }
+  /**
+   * Nearest boundary of the active region, in the regions' own terms (bjtRegion): cut-off where the forward
+   * transport current falls to BJT_CONDUCTING_CURRENT_A, saturation where the reverse one reaches
+   * BJT_SATURATION_RATIO of the forward one.
+   */
+  regionMargin(x: Float64Array, vt: number): RegionMargin {
+    const [vbe, vbc] = this.junctions(x);
+    const cutOff = vbe - vt * Math.log(BJT_CONDUCTING_CURRENT_A / numberValue(this.part, "is") + 1);
+    const saturation = vbe + vt * Math.log(BJT_SATURATION_RATIO) - vbc;
+    return cutOff < saturation ? { margin: cutOff, reason: "cut-off" } : { margin: saturation, reason: "saturation" };
   }
   stampAc(ctx: AcStampContext): void {
     const [vbe, vbc] = this.junctions(ctx.x);

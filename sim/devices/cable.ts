@@ -16,6 +16,7 @@ import {
   type ExtraUnknown,
   numberValue,
   type OperatingPointView,
+  type TransientStampContext,
 } from "./device";
 import { SeriesBranch } from "./series-branch";
 import { declareTwoTerminal, stampTwoTerminal, type TwoTerminalHandles } from "./stamps";
@@ -62,6 +63,18 @@ class Cable implements Device {
     const last = this.joints.length - 1;
     this.shunts.forEach((h, j) => {
       stampTwoTerminal(ctx.addReactance, h, j === 0 || j === last ? c / 2 : c);
+    });
+  }
+  /** one charge per joint (the shunt capacitances); the sections carry no inductance */
+  transientStateCount(): number {
+    return this.joints.length;
+  }
+  stampTransient(ctx: TransientStampContext): void {
+    this.stampDc(ctx);
+    const c = this.sectionCapacitance();
+    const last = this.joints.length - 1;
+    this.shunts.forEach((h, j) => {
+      ctx.capacitance(j, h, this.joints[j], this.ref, j === 0 || j === last ? c / 2 : c);
     });
   }
   report() {

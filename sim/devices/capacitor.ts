@@ -1,7 +1,14 @@
 /** Capacitor: open at DC; jωC between a and b in the small-signal system. Noiseless. */
 import type { ElaboratedPart } from "../circuit/types";
 import type { PatternBuilder } from "../mna/pattern";
-import { type AcStampContext, type Device, type DeviceKind, type DeviceWiring, numberValue } from "./device";
+import {
+  type AcStampContext,
+  type Device,
+  type DeviceKind,
+  type DeviceWiring,
+  numberValue,
+  type TransientStampContext,
+} from "./device";
 import { declareTwoTerminal, stampTwoTerminal, type TwoTerminalHandles } from "./stamps";
 
 class Capacitor implements Device {
@@ -22,6 +29,12 @@ class Capacitor implements Device {
   stampDc(): void {}
   stampAc(ctx: AcStampContext): void {
     stampTwoTerminal(ctx.addReactance, this.h, numberValue(this.part, "capacitance"));
+  }
+  transientStateCount(): number {
+    return 1;
+  }
+  stampTransient(ctx: TransientStampContext): void {
+    ctx.capacitance(0, this.h, this.a, this.b, numberValue(this.part, "capacitance"));
   }
   report() {
     return null;

@@ -18,6 +18,7 @@ import {
   numberValue,
   type OperatingPointView,
   optionalNumber,
+  type TransientStampContext,
 } from "./device";
 import { declareTwoTerminal, stampTwoTerminal, type TwoTerminalHandles, voltageAt } from "./stamps";
 
@@ -71,6 +72,19 @@ class Capsule implements Device {
     const wc = 2 * Math.PI * ctx.frequency * numberValue(this.part, "capacitance");
     ctx.addRhs(this.diaphragm, -wc * ei, wc * er);
     ctx.addRhs(this.backplate, wc * ei, -wc * er);
+  }
+  /** stored quantities: the charge, then the resonance filter's two states */
+  transientStateCount(): number {
+    return 3;
+  }
+  /**
+   * Transient: the EMF e(t) = −(V0 + electret_voltage)·strain_per_pa·p(t), p through the resonance filter when
+   * `resonance` is given, V0 from the DC operating point, in series with the capacitance.
+   */
+  stampTransient(ctx: TransientStampContext): void {
+    const pressure = ctx.capsulePressure(1, optionalNumber(this.part, "resonance"), numberValue(this.part, "q"));
+    const emf = -this.polarisation(ctx.operatingPoint) * numberValue(this.part, "strain_per_pa") * pressure;
+    ctx.capacitance(0, this.h, this.diaphragm, this.backplate, numberValue(this.part, "capacitance"), emf);
   }
   report(op: OperatingPointView) {
     return { values: { polarisation: this.polarisation(op.x) }, warnings: [] };

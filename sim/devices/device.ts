@@ -11,11 +11,15 @@
  *   reactance is a capacitance or an inductance carried by a branch current (the −L sits in C) — and, for
  *   sources and capsules, its drive on the right-hand side at a given frequency;
  * - its report: region, small-signal parameters and warnings at the operating point;
- * - its noise generators at the operating point (used by the noise analysis).
+ * - its noise generators at the operating point (used by the noise analysis);
+ * - transient (large-signal analyses): `stampTransient`, its Newton companion at one time step with every stored
+ *   quantity (a capacitance's charge, an inductance's flux, a capsule's filtered pressure) replaced by the
+ *   integration formula through the context's helpers; kinds without memory leave it out and their DC stamp is used.
  */
 import type { ElaboratedPart } from "../circuit/types";
 import type { PatternBuilder } from "../mna/pattern";
 import type { OpValue, SimWarning } from "../results";
+import type { TwoTerminalHandles } from "./stamps";
 
 export type UnknownKind = "voltage" | "current";
 
@@ -75,6 +79,45 @@ export interface OperatingPointView {
   readonly temperature: number;
 }
 
+/**
+ * The transient Newton iteration's view, given to `stampTransient` at one time step (sim/analyses/transient*.ts).
+ * It is a DC context (the same Jacobian and right-hand side, source scale 1) plus the integration of stored
+ * quantities: a device names each stored quantity by a small local index (0, 1, …, below `transientStateCount`)
+ * and the context keeps its history and turns it into a companion (conductance plus current) by the integration
+ * formula of the present step: dq/dt ≈ a0·q + history.
+ */
+export interface TransientStampContext extends DcStampContext {
+  /** time of the point being solved, s */
+  readonly time: number;
+  /** the DC operating point by unknown (a capsule's polarisation V0 comes from it) */
+  readonly operatingPoint: Float64Array;
+  /** value of an independent source at this time: its dc plus the drive's waveform where it drives it (V or A) */
+  sourceValue(part: ElaboratedPart): number;
+  /**
+   * Linear capacitance `capacitance` (F) between nets a and b (handles declared by the device), stored quantity
+   * `state`: charge q = C·(V(a) − V(b) − offset). `offset` (V) is an EMF in series (a capsule's).
+   */
+  capacitance(state: number, handles: TwoTerminalHandles, a: number, b: number, capacitance: number, offset?: number): void;
+  /**
+   * Linear inductance `inductance` (H) of the branch current `branch` whose row is V(a) − V(b) − … = 0 and whose
+   * self entry is `self`: flux φ = L·I, stored quantity `state`; adds −dφ/dt to the row.
+   */
+  inductance(state: number, self: number, branch: number, inductance: number): void;
+  /**
+   * The acoustic pressure on a capsule at this time, Pa, through the second-order resonance filter
+   * 1/(1 + s/(ω0·q) + s²/ω0²) when `resonance` (Hz) is given (stored quantities `state` and `state + 1`), else
+   * the drive's pressure itself.
+   */
+  capsulePressure(state: number, resonance: number | undefined, q: number): number;
+}
+
+/** How close a device is to leaving its intended large-signal region, and which boundary. */
+export interface RegionMargin {
+  /** V; negative once the device has left its region */
+  margin: number;
+  reason: "cut-off" | "saturation" | "gate conduction" | "grid conduction";
+}
+
 export interface DeviceReport {
   values: Record<string, OpValue>;
   warnings: SimWarning[];
@@ -109,6 +152,12 @@ export interface Device {
   /** null when a kind has nothing to report */
   report(op: OperatingPointView): DeviceReport | null;
   noiseSources(op: OperatingPointView): NoiseGenerator[];
+  /** how many stored quantities the transient stamp integrates (absent: none) */
+  transientStateCount?(): number;
+  /** transient companion at one time step (absent: `stampDc`, for kinds without memory) */
+  stampTransient?(ctx: TransientStampContext): void;
+  /** active devices: the nearest region boundary at solution x (used for max_spl_limited_by) */
+  regionMargin?(x: Float64Array, thermalVoltage: number): RegionMargin | null;
 }
 
 export interface DeviceKind {

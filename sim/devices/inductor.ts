@@ -9,6 +9,7 @@ import {
   type DeviceWiring,
   numberValue,
   type OperatingPointView,
+  type TransientStampContext,
 } from "./device";
 import { SeriesBranch } from "./series-branch";
 
@@ -32,6 +33,12 @@ class Inductor implements Device {
   }
   stampAc(ctx: AcStampContext): void {
     this.element.stampAc(ctx, this.resistance(), numberValue(this.part, "inductance"));
+  }
+  transientStateCount(): number {
+    return 1;
+  }
+  stampTransient(ctx: TransientStampContext): void {
+    this.element.stampTransient(ctx, 0, this.resistance(), numberValue(this.part, "inductance"));
   }
   report(op: OperatingPointView) {
     return { values: { current: op.x[this.element.branch] }, warnings: [] };

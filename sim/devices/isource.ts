@@ -10,6 +10,7 @@ import {
   type DeviceKind,
   type DeviceWiring,
   numberValue,
+  type TransientStampContext,
 } from "./device";
 
 const DEGREES_TO_RADIANS = Math.PI / 180;
@@ -29,6 +30,11 @@ class CurrentSource implements Device {
   stampDc(ctx: DcStampContext): void {
     const current = numberValue(this.part, "dc") * ctx.sourceScale;
     // Leaving p through the source is +current in row p; moved to the right-hand side.
+    ctx.addRhs(this.p, -current);
+    ctx.addRhs(this.n, current);
+  }
+  stampTransient(ctx: TransientStampContext): void {
+    const current = ctx.sourceValue(this.part);
     ctx.addRhs(this.p, -current);
     ctx.addRhs(this.n, current);
   }

@@ -15,6 +15,8 @@ import {
   type DeviceWiring,
   numberValue,
   type OperatingPointView,
+  type RegionMargin,
+  type TransientStampContext,
 } from "./device";
 import { jfetDrainCurrent, type JfetParameters } from "./jfet-model";
 import { limitStep } from "./limiting";
@@ -106,6 +108,32 @@ class Jfet implements Device {
     this.lastVgs = limited;
     this.linearise(limited, vds, ctx.x);
     this.block.stampDc(ctx);
+  }
+
+  /** stored quantities: the charges of cgs and cgd */
+  transientStateCount(): number {
+    return 2;
+  }
+  stampTransient(ctx: TransientStampContext): void {
+    this.stampDc(ctx);
+    ctx.capacitance(0, this.gateSource, this.nets[GATE], this.nets[SOURCE], numberValue(this.part, "cgs"));
+    ctx.capacitance(1, this.gateDrain, this.nets[GATE], this.nets[DRAIN], numberValue(this.part, "cgd"));
+  }
+
+  /**
+   * Nearest boundary (n frame): cut-off at Vov = 0, the ohmic region at Vds = Vov (reported as "saturation": the
+   * drain runs out of voltage headroom, as a bipolar transistor saturates), and gate conduction at a forward bias
+   * of JFET_GATE_FORWARD_WARNING_V.
+   */
+  regionMargin(x: Float64Array): RegionMargin {
+    const [vgs, vds] = this.frameVoltages(x);
+    const vov = vgs - this.parameters().pinchOff;
+    const candidates: RegionMargin[] = [
+      { margin: vov, reason: "cut-off" },
+      { margin: Math.abs(vds) - vov, reason: "saturation" },
+      { margin: JFET_GATE_FORWARD_WARNING_V - Math.max(vgs, vgs - vds), reason: "gate conduction" },
+    ];
+    return candidates.reduce((a, b) => (b.margin < a.margin ? b : a));
   }
 
   stampAc(ctx: AcStampContext): void {

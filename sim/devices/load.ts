@@ -9,6 +9,7 @@ import {
   type DeviceWiring,
   numberValue,
   type OperatingPointView,
+  type TransientStampContext,
 } from "./device";
 import { thermalCurrentPsd } from "./physics";
 import { declareTwoTerminal, stampTwoTerminal, type TwoTerminalHandles } from "./stamps";
@@ -43,6 +44,13 @@ class Load implements Device {
   stampAc(ctx: AcStampContext): void {
     if (this.resistive) stampTwoTerminal(ctx.addConductance, this.resistive, this.conductance());
     if (this.capacitive) stampTwoTerminal(ctx.addReactance, this.capacitive, numberValue(this.part, "capacitance"));
+  }
+  transientStateCount(): number {
+    return 1;
+  }
+  stampTransient(ctx: TransientStampContext): void {
+    this.stampDc(ctx);
+    if (this.capacitive) ctx.capacitance(0, this.capacitive, this.p, this.n, numberValue(this.part, "capacitance"));
   }
   report() {
     return null;

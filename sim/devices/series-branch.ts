@@ -5,7 +5,7 @@
  * Used by the inductor, each cable section and the transformer's primary.
  */
 import type { PatternBuilder } from "../mna/pattern";
-import type { AcStampContext, DcStampContext, NoiseGenerator } from "./device";
+import type { AcStampContext, DcStampContext, NoiseGenerator, TransientStampContext } from "./device";
 import { thermalVoltagePsd } from "./physics";
 import { type BranchHandles, declareBranch, stampBranchIncidence } from "./stamps";
 
@@ -37,6 +37,12 @@ export class SeriesBranch {
     stampBranchIncidence(ctx.addConductance, this.incidence);
     ctx.addConductance(this.self, -resistance);
     ctx.addReactance(this.self, -inductance);
+  }
+
+  /** transient: the DC stamp plus the flux L·I as stored quantity `state` (skipped for L = 0) */
+  stampTransient(ctx: TransientStampContext, state: number, resistance: number, inductance: number): void {
+    this.stampDc(ctx, resistance);
+    if (inductance > 0) ctx.inductance(state, this.self, this.branch, inductance);
   }
 
   /** thermal noise of the series resistance as a voltage generator in the branch row */

@@ -19,6 +19,7 @@ import {
   type DeviceWiring,
   numberValue,
   type OperatingPointView,
+  type TransientStampContext,
 } from "./device";
 import { thermalVoltagePsd } from "./physics";
 import { declareTwoTerminal, stampTwoTerminal, type TwoTerminalHandles } from "./stamps";
@@ -103,6 +104,22 @@ class Transformer implements Device {
     this.magnetising.stampAc(ctx, 0, numberValue(this.part, "primary_inductance"));
     this.stampIdeal(ctx.addConductance);
     stampTwoTerminal(ctx.addReactance, this.secondaryShunt, numberValue(this.part, "secondary_capacitance"));
+  }
+  /** stored quantities: leakage flux, magnetising flux, secondary capacitance charge */
+  transientStateCount(): number {
+    return 3;
+  }
+  stampTransient(ctx: TransientStampContext): void {
+    this.primarySeries.stampTransient(
+      ctx,
+      0,
+      numberValue(this.part, "primary_resistance"),
+      numberValue(this.part, "leakage_inductance"),
+    );
+    this.magnetising.stampTransient(ctx, 1, 0, numberValue(this.part, "primary_inductance"));
+    this.stampIdeal(ctx.add);
+    const { s1, s2 } = this.pins;
+    ctx.capacitance(2, this.secondaryShunt, s1, s2, numberValue(this.part, "secondary_capacitance"));
   }
   report() {
     return null;

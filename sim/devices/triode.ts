@@ -16,6 +16,8 @@ import {
   type DeviceWiring,
   numberValue,
   type OperatingPointView,
+  type RegionMargin,
+  type TransientStampContext,
 } from "./device";
 import { declareTwoTerminal, stampTwoTerminal, type TwoTerminalHandles, voltageAt } from "./stamps";
 import { TerminalBlock } from "./terminal-block";
@@ -101,6 +103,23 @@ class Triode implements Device {
     this.lastControl = u;
     this.linearise(u, ctx.x);
     this.block.stampDc(ctx);
+  }
+  /** stored quantities: the charges of cgk, cga and cak */
+  transientStateCount(): number {
+    return 3;
+  }
+  stampTransient(ctx: TransientStampContext): void {
+    this.stampDc(ctx);
+    const [a, g, k] = this.nets;
+    ctx.capacitance(0, this.gk, g, k, numberValue(this.part, "cgk"));
+    ctx.capacitance(1, this.ga, g, a, numberValue(this.part, "cga"));
+    ctx.capacitance(2, this.ak, a, k, numberValue(this.part, "cak"));
+  }
+  /** Nearest boundary: cut-off at Vak + mu·Vgk = 0 (in grid volts, divided by mu) or grid conduction at Vgk = 0. */
+  regionMargin(x: Float64Array): RegionMargin {
+    const vgk = voltageAt(x, this.nets[GRID]) - voltageAt(x, this.nets[CATHODE]);
+    const cutOff = this.control(x) / Math.max(numberValue(this.part, "mu"), 1);
+    return cutOff < -vgk ? { margin: cutOff, reason: "cut-off" } : { margin: -vgk, reason: "grid conduction" };
   }
   stampAc(ctx: AcStampContext): void {
     this.linearise(this.control(ctx.x), ctx.x);

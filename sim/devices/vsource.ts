@@ -14,6 +14,7 @@ import {
   type DeviceWiring,
   numberValue,
   type OperatingPointView,
+  type TransientStampContext,
 } from "./device";
 import { type BranchHandles, declareBranch, stampBranchIncidence } from "./stamps";
 
@@ -39,6 +40,10 @@ class VoltageSource implements Device {
   stampDc(ctx: DcStampContext): void {
     stampBranchIncidence(ctx.add, this.h);
     ctx.addRhs(this.branch, numberValue(this.part, "dc") * ctx.sourceScale);
+  }
+  stampTransient(ctx: TransientStampContext): void {
+    stampBranchIncidence(ctx.add, this.h);
+    ctx.addRhs(this.branch, ctx.sourceValue(this.part));
   }
   stampAc(ctx: AcStampContext): void {
     stampBranchIncidence(ctx.addConductance, this.h);
