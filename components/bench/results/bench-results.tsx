@@ -6,7 +6,8 @@
  * explanation; `onApplyValues` writes a calculator's result into a part (absent or readOnly: no writing).
  */
 import dynamic from "next/dynamic";
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useState } from "react";
+import type { OpResult } from "@/sim/results";
 import { CalculatorsPanel } from "../calculators/calculators-panel";
 import type { ApplyValues } from "../calculators/capsule-calculator";
 import type { DestinationChoice } from "../destinations/destination-picker";
@@ -14,10 +15,12 @@ import { DestinationPicker } from "../destinations/destination-picker";
 import { DEFAULT_CABLE_LENGTH_M } from "../destinations/presets";
 import type { BenchDocument } from "../document";
 import { ExplainPanel } from "../explain/explain-panel";
+import { type MeasurementOverlay, MeasurementsPanel } from "../measurements/measurements-panel";
 import { OverlayControls, type RevisionSource } from "../overlays/overlay-controls";
 import { type PinnedResult, pinCurve } from "../overlays/pinned";
 import { OVERLAY_COLOURS, PLOT_COLOURS } from "../plots/palette";
 import type { PlotCurve } from "../plots/traces";
+import type { BenchSolveError } from "../solver/protocol";
 import { type OverlayChoice, useLiveSolve } from "../solver/use-live-solve";
 import { type CurveRow, CurvesTable } from "./curves-table";
 import { FiguresPanel } from "./figures-panel";
@@ -32,10 +35,11 @@ const PlotsPanel = dynamic(() => import("../plots/plots-panel"), {
   ),
 });
 
-type Tab = "op" | "overlays" | "explain" | "calculators";
+type Tab = "op" | "overlays" | "measurements" | "explain" | "calculators";
 const TABS: { name: Tab; label: string }[] = [
   { name: "op", label: "Operating point" },
   { name: "overlays", label: "Destinations & overlays" },
+  { name: "measurements", label: "Measurements" },
   { name: "explain", label: "Explain" },
   { name: "calculators", label: "Calculators" },
 ];
@@ -49,6 +53,16 @@ export interface BenchResultsProps {
   readOnly?: boolean;
   /** where the other revisions of this design are listed (absent on a bench link) */
   revisions?: RevisionSource;
+  /**
+   * Told the live solve's error and the operating point of the newest result that solved, whenever either changes,
+   * so the canvas can mark the part or net at fault and the caution banner can read the real net voltages.
+   */
+  onLiveState?: (state: BenchLiveState) => void;
+}
+
+export interface BenchLiveState {
+  error: BenchSolveError | null;
+  op: OpResult | null;
 }
 
 const NO_OVERLAYS: OverlayChoice = { variants: [], revisions: [] };
@@ -61,6 +75,7 @@ export function BenchResults({
   selected,
   readOnly,
   revisions,
+  onLiveState,
 }: BenchResultsProps) {
   const [tab, setTab] = useState<Tab>("op");
   const [destinations, setDestinations] = useState<DestinationChoice>({
@@ -69,6 +84,7 @@ export function BenchResults({
   });
   const [overlays, setOverlays] = useState<OverlayChoice>(NO_OVERLAYS);
   const [pinned, setPinned] = useState<PinnedResult | null>(null);
+  const [measured, setMeasured] = useState<MeasurementOverlay | null>(null);
   const live = useLiveSolve(document, {
     variant,
     destinations: destinations.destinations,
@@ -77,6 +93,10 @@ export function BenchResults({
   });
   const { result, family } = live;
   const doc = result?.document;
+  const liveOp = doc?.op ?? null;
+  useEffect(() => {
+    onLiveState?.({ error: live.error, op: liveOp });
+  }, [onLiveState, live.error, liveOp]);
 
   const liveCurve = useMemo((): PlotCurve | null => {
     const ac = doc?.ac;
@@ -96,6 +116,8 @@ export function BenchResults({
     const list: PlotCurve[] = [];
     if (liveCurve) list.push(liveCurve);
     if (pinned) list.push(pinned.curve);
+    // a measurement has no simulated phase to sit beside; only its (aligned) magnitude is drawn
+    if (measured) list.push({ ...measured, magnitude_db: measured.level_db, phase_deg: [], style: "overlay", colour: "#b4410b" });
     familyCurves.forEach((c, i) => {
       if (!c.error)
         list.push({
@@ -109,7 +131,7 @@ export function BenchResults({
         });
     });
     return list;
-  }, [liveCurve, pinned, familyCurves]);
+  }, [liveCurve, pinned, measured, familyCurves]);
 
   const rows: CurveRow[] = [
     ...(doc
@@ -243,6 +265,18 @@ export function BenchResults({
               />
             </div>
           )}
+          {tab === "measurements" &&
+            (revisions ? (
+              <MeasurementsPanel
+                workspaceId={revisions.workspaceId}
+                designId={revisions.designId}
+                canUpload={!readOnly}
+                simulated={liveCurve ? { frequency: liveCurve.frequency, level_db: liveCurve.magnitude_db } : null}
+                onOverlay={setMeasured}
+              />
+            ) : (
+              <p className="text-sm text-ink-soft">Measurements are kept with the design; open its bench to compare them.</p>
+            ))}
           {tab === "explain" && (
             <ExplainPanel
               circuit={document.circuit}

