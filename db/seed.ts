@@ -10,6 +10,7 @@ import { Pool } from "pg";
 import { DEMO_PASSWORD, DEMO_PENDING_INVITATION, DEMO_PEOPLE, DEMO_WORKSPACE } from "./demo-people";
 import { invitations, memberships, users, workspaces } from "./schema";
 import { seedDesigns } from "./seed-designs";
+import { seedReviews } from "./seed-reviews";
 
 /** bcrypt cost for demo accounts; real sign-ups use the cost in the auth module. */
 const DEMO_HASH_ROUNDS = 10;
@@ -45,6 +46,7 @@ export async function seedDemo(url: string): Promise<void> {
       }
       await seedPendingInvitation(tx, workspace.id);
       await seedDesigns(tx, workspace.id);
+      await seedReviews(tx, workspace.id);
     });
   } finally {
     await pool.end();
