@@ -3,15 +3,16 @@
  * at the operating point, as { frequency, re, im, magnitude_db, phase_deg }. Warnings: a capsule whose gap the
  * drive closes by more than CAPSULE_GAP_WARNING_FRACTION (the linear capsule model no longer holds).
  *
- * A sweep factors SWEEP_LANES frequencies at a time (sim/mna/sparse-lu-complex-lanes.ts) on the same G and C the
- * model stamps, with the same drive; each lane's arithmetic is the model's own, so every point equals
- * `model.response` at that frequency. A frequency whose static pivots fail is handed to `model.response` itself
+ * A sweep factors SWEEP_LANES frequencies at a time (sim/mna/sparse-lu-complex-lanes.ts) on the G and C the
+ * model stamped, with the same drive, and solves only for the output unknowns; each lane's arithmetic is the
+ * model's own, so every point equals `model.response` at that frequency. A frequency whose static pivots fail is handed to `model.response` itself
  * (dense fallback, singular-circuit errors named as usual).
  */
-import type { AcDriveContext, AcStampContext, Device } from "../devices/device";
+import type { AcDriveContext, Device } from "../devices/device";
 import { numberValue } from "../devices/device";
-import { SparseLuComplexLanes, SWEEP_LANES } from "../mna/sparse-lu-complex-lanes";
+import { type OutputPlan, SparseLuComplexLanes, SWEEP_LANES } from "../mna/sparse-lu-complex-lanes";
 import type { AcResult, SimWarning } from "../results";
+import type { CompiledCircuit } from "./compile";
 import type { ComplexValue, SmallSignalModel } from "./small-signal";
 
 /** Contract: warn when the drive closes a capsule gap by more than 10 %. */
@@ -71,76 +72,87 @@ export function capsuleWarnings(model: SmallSignalModel, pressure: number): SimW
 }
 
 /**
- * One sweep engine per model: a model's G and C are stamped once when it is built (small-signal.ts), so the
- * engine's copy, stamped the same way from the same operating point, stays valid for the model's lifetime.
+ * One sweep engine per model: a model's G and C are stamped once when it is built (small-signal.ts) and never
+ * changed, so the engine reads them in place for the model's lifetime.
  */
 const sweeps = new WeakMap<SmallSignalModel, AcSweep>();
 
 function sweepFor(model: SmallSignalModel): AcSweep {
   let sweep = sweeps.get(model);
   if (!sweep) {
-    sweep = new AcSweep(model);
+    sweep = new AcSweep(model, laneWorkspaceFor(model.compiled));
     sweeps.set(model, sweep);
   }
   return sweep;
 }
 
-/** G, C, drive and lane-interleaved buffers for sweeping one small-signal model; nothing allocated per point. */
+/**
+ * What a sweep needs that depends only on the compiled circuit: the lane factorisation's buffers, the
+ * lane-interleaved right-hand sides, the output unknowns and the solve plan for them. A Monte Carlo run builds a
+ * new model per run on the same compiled circuit; sharing these saves re-allocating them every run. Sharing is
+ * safe because a sweep factors, solves and reads its lanes within one synchronous `run` that nothing re-enters
+ * (the dense fallback goes through the model's own system).
+ */
+interface LaneWorkspace {
+  lu: SparseLuComplexLanes;
+  plan: OutputPlan;
+  rhsRe: Float64Array;
+  rhsIm: Float64Array;
+  drivers: Device[];
+  plus: number;
+  minus: number;
+}
+
+const laneWorkspaces = new WeakMap<CompiledCircuit, LaneWorkspace>();
+
+function laneWorkspaceFor(compiled: CompiledCircuit): LaneWorkspace {
+  let workspace = laneWorkspaces.get(compiled);
+  if (!workspace) {
+    const n = compiled.unknowns.length;
+    const lu = new SparseLuComplexLanes(compiled.ac);
+    const plus = compiled.netIndex.get(compiled.circuit.output.plus) ?? -1;
+    const minus = compiled.netIndex.get(compiled.circuit.output.minus) ?? -1;
+    workspace = {
+      lu,
+      plan: lu.outputPlan([plus, minus].filter((u) => u >= 0)),
+      // Row n of each lane is the ground scratch row the devices never write (they skip row < 0); kept for
+      // symmetry with the model's right-hand side.
+      rhsRe: new Float64Array((n + 1) * SWEEP_LANES),
+      rhsIm: new Float64Array((n + 1) * SWEEP_LANES),
+      drivers: compiled.devices.filter((d) => d.stampAcDrive !== undefined),
+      plus,
+      minus,
+    };
+    laneWorkspaces.set(compiled, workspace);
+  }
+  return workspace;
+}
+
+/** Sweeping one small-signal model on the compiled circuit's lane workspace; nothing allocated per point. */
 class AcSweep {
   private readonly model: SmallSignalModel;
-  private readonly conductance: Float64Array;
-  private readonly reactance: Float64Array;
-  private readonly lu: SparseLuComplexLanes;
-  private readonly drivers: Device[];
+  private readonly workspace: LaneWorkspace;
   private readonly drive: LaneDriveContext;
-  private readonly rhsRe: Float64Array;
-  private readonly rhsIm: Float64Array;
   private readonly omegas = new Float64Array(SWEEP_LANES);
-  private readonly plus: number;
-  private readonly minus: number;
   private readonly fallback: ComplexValue = { re: 0, im: 0 };
 
-  constructor(model: SmallSignalModel) {
+  constructor(model: SmallSignalModel, workspace: LaneWorkspace) {
     this.model = model;
-    const { compiled, op } = model;
-    const structure = compiled.ac;
-    const n = compiled.unknowns.length;
-    this.conductance = new Float64Array(structure.nnz + 1);
-    this.reactance = new Float64Array(structure.nnz + 1);
-    const positions = structure.positionOfHandle;
-    const { conductance, reactance } = this;
-    // The same stamps, in the same order, as SmallSignalModel's constructor: identical G and C.
-    const ctx: AcStampContext = {
-      x: op.x,
-      thermalVoltage: op.thermalVoltage,
-      addConductance: (h, v) => {
-        conductance[positions[h]] += v;
-      },
-      addReactance: (h, v) => {
-        reactance[positions[h]] += v;
-      },
-    };
-    for (const d of compiled.devices) d.stampAc(ctx);
-    this.lu = new SparseLuComplexLanes(structure);
-    // Row n of each lane is the ground scratch row the devices never write (they skip row < 0); kept for symmetry
-    // with the model's right-hand side.
-    this.rhsRe = new Float64Array((n + 1) * SWEEP_LANES);
-    this.rhsIm = new Float64Array((n + 1) * SWEEP_LANES);
-    this.drivers = compiled.devices.filter((d) => d.stampAcDrive !== undefined);
-    this.drive = new LaneDriveContext(op.x, this.rhsRe, this.rhsIm);
-    this.plus = compiled.netIndex.get(compiled.circuit.output.plus) ?? -1;
-    this.minus = compiled.netIndex.get(compiled.circuit.output.minus) ?? -1;
+    this.workspace = workspace;
+    this.drive = new LaneDriveContext(model.op.x, workspace.rhsRe, workspace.rhsIm);
   }
 
   /** Response at every frequency into outRe/outIm (same length as `frequencies`). */
   run(frequencies: ArrayLike<number>, pressure: number, outRe: number[], outIm: number[]): void {
     const count = frequencies.length;
-    const { omegas, drive, drivers, lu, plus, minus } = this;
+    const { omegas, drive } = this;
+    const { drivers, lu, plan, plus, minus, rhsRe, rhsIm } = this.workspace;
+    const { conductance, reactance } = this.model;
     drive.pressure = pressure;
     for (let start = 0; start < count; start += SWEEP_LANES) {
       const used = Math.min(SWEEP_LANES, count - start);
-      this.rhsRe.fill(0);
-      this.rhsIm.fill(0);
+      rhsRe.fill(0);
+      rhsIm.fill(0);
       for (let b = 0; b < SWEEP_LANES; b++) {
         // A short last group repeats its last frequency in the unused lanes (their results are not read).
         const frequency = frequencies[start + Math.min(b, used - 1)];
@@ -149,8 +161,9 @@ class AcSweep {
         drive.frequency = frequency;
         for (const d of drivers) d.stampAcDrive!(drive);
       }
-      const failed = lu.factorAt(this.conductance, this.reactance, omegas);
-      lu.solve(this.rhsRe, this.rhsIm);
+      const failed = lu.factorAt(conductance, reactance, omegas);
+      // Only the output unknowns are read: the plan skips the steps they do not depend on.
+      lu.solvePlanned(rhsRe, rhsIm, plan);
       for (let b = 0; b < used; b++) {
         const i = start + b;
         if (failed & (1 << b)) {

@@ -5,14 +5,25 @@
  */
 import type { Figures } from "../results";
 import { toDecibels } from "./ac";
-import { CORNER_HIGHEST_HZ, CORNER_LOWEST_HZ, findCorner, REFERENCE_FREQUENCY_HZ } from "./corners";
+import {
+  CORNER_HIGHEST_HZ,
+  CORNER_LOWEST_HZ,
+  findCorner,
+  findCornerFromSweep,
+  REFERENCE_FREQUENCY_HZ,
+  type ResponseSamples,
+} from "./corners";
 import type { SmallSignalModel } from "./small-signal";
 
 function finiteOrNull(v: number): number | null {
   return Number.isFinite(v) ? v : null;
 }
 
-export function computeFigures(model: SmallSignalModel, pressure: number): Figures {
+/**
+ * `sweep`, when given, must be this model's AC sweep at this `pressure` (runAc's result): the corners are then
+ * bracketed from its points instead of a fresh grid walk (corners.ts), which is most of the figures' solves.
+ */
+export function computeFigures(model: SmallSignalModel, pressure: number, sweep?: ResponseSamples): Figures {
   const value = { re: 0, im: 0 };
   const magnitudeAt = (f: number) => {
     model.response(f, pressure, value);
@@ -26,12 +37,14 @@ export function computeFigures(model: SmallSignalModel, pressure: number): Figur
   const target = magnitude / Math.SQRT2;
   const sensitivity = capsuleDriven ? magnitude / Math.abs(pressure) : Number.NaN;
   const z = model.outputImpedance(REFERENCE_FREQUENCY_HZ);
+  const corner = (limit: number) =>
+    sweep ? findCornerFromSweep(magnitudeAt, target, limit, sweep) : findCorner(magnitudeAt, target, limit);
   return {
     gain_1khz_db: driven ? finiteOrNull(toDecibels(magnitude)) : null,
     sensitivity_v_per_pa: capsuleDriven && driven ? finiteOrNull(sensitivity) : null,
     sensitivity_db_re_1v_per_pa: capsuleDriven && driven ? finiteOrNull(toDecibels(sensitivity)) : null,
-    low_corner_hz: driven ? findCorner(magnitudeAt, target, CORNER_LOWEST_HZ) : null,
-    high_corner_hz: driven ? findCorner(magnitudeAt, target, CORNER_HIGHEST_HZ) : null,
+    low_corner_hz: driven ? corner(CORNER_LOWEST_HZ) : null,
+    high_corner_hz: driven ? corner(CORNER_HIGHEST_HZ) : null,
     output_impedance_1khz_ohm: finiteOrNull(Math.hypot(z.re, z.im)),
     polarity: driven ? (Math.abs(phase) <= Math.PI / 2 ? "non-inverting" : "inverting") : null,
     self_noise_dba_spl: null,

@@ -57,6 +57,16 @@ export class SmallSignalModel {
     this.drive = new DriveContext(op.x, this.rhsRe, this.rhsIm);
   }
 
+  /** G by storage position of the AC structure, as stamped at the operating point (read-only for others) */
+  get conductance(): Float64Array {
+    return this.system.conductance;
+  }
+
+  /** C by storage position (capacitances, −L on inductor branch rows), as stamped (read-only for others) */
+  get reactance(): Float64Array {
+    return this.system.reactance;
+  }
+
   /** how many frequencies needed the dense fallback */
   get denseFallbacks(): number {
     return this.system.denseFallbacks;

@@ -30,6 +30,12 @@ export const ALL_LANES = (1 << SWEEP_LANES) - 1;
 /** log2(SWEEP_LANES): lane-group offsets are computed with a shift. The kernels below are written for 4 lanes. */
 const LANE_SHIFT = 2;
 
+/** Which elimination steps a restricted solve visits (outputPlan): forward in increasing, back in decreasing order. */
+export interface OutputPlan {
+  forwardSteps: Int32Array;
+  backSteps: Int32Array;
+}
+
 export class SparseLuComplexLanes {
   readonly structure: SparseStructure;
   /** factor values, lane-interleaved: position k of lane b at k·SWEEP_LANES + b */
@@ -230,6 +236,138 @@ export class SparseLuComplexLanes {
     const invIm = this.inversePivotIm;
     // Back substitution with the upper factor, then the multiplication by the inverse pivot.
     for (let p = n - 1; p >= 0; p--) {
+      const at = p << LANE_SHIFT;
+      let s0r = wr[at];
+      let s0i = wi[at];
+      let s1r = wr[at + 1];
+      let s1i = wi[at + 1];
+      let s2r = wr[at + 2];
+      let s2i = wi[at + 2];
+      let s3r = wr[at + 3];
+      let s3i = wi[at + 3];
+      const end = rowStart[p + 1];
+      for (let k = diagonalPosition[p] + 1; k < end; k++) {
+        const c = columnOf[k] << LANE_SHIFT;
+        const kk = k << LANE_SHIFT;
+        s0r -= re[kk] * wr[c] - im[kk] * wi[c];
+        s0i -= re[kk] * wi[c] + im[kk] * wr[c];
+        s1r -= re[kk + 1] * wr[c + 1] - im[kk + 1] * wi[c + 1];
+        s1i -= re[kk + 1] * wi[c + 1] + im[kk + 1] * wr[c + 1];
+        s2r -= re[kk + 2] * wr[c + 2] - im[kk + 2] * wi[c + 2];
+        s2i -= re[kk + 2] * wi[c + 2] + im[kk + 2] * wr[c + 2];
+        s3r -= re[kk + 3] * wr[c + 3] - im[kk + 3] * wi[c + 3];
+        s3i -= re[kk + 3] * wi[c + 3] + im[kk + 3] * wr[c + 3];
+      }
+      wr[at] = s0r * invRe[at] - s0i * invIm[at];
+      wi[at] = s0r * invIm[at] + s0i * invRe[at];
+      wr[at + 1] = s1r * invRe[at + 1] - s1i * invIm[at + 1];
+      wi[at + 1] = s1r * invIm[at + 1] + s1i * invRe[at + 1];
+      wr[at + 2] = s2r * invRe[at + 2] - s2i * invIm[at + 2];
+      wi[at + 2] = s2r * invIm[at + 2] + s2i * invRe[at + 2];
+      wr[at + 3] = s3r * invRe[at + 3] - s3i * invIm[at + 3];
+      wi[at + 3] = s3r * invIm[at + 3] + s3i * invRe[at + 3];
+    }
+  }
+
+  /**
+   * The steps a solve must visit to give `unknowns` (original order) and nothing else. Back substitution at a
+   * step reads the solution at the later steps its upper-factor row names, so the back steps are the closure of
+   * the wanted steps under the upper factor; forward substitution at a step reads the earlier steps its
+   * lower-factor row names, so the forward steps are the closure of the back steps under the lower factor.
+   * A sweep reads one or two unknowns, and on a circuit's matrix those closures are usually a fraction of it.
+   */
+  outputPlan(unknowns: readonly number[]): OutputPlan {
+    const s = this.structure;
+    const { rowStart, columnOf, diagonalPosition } = s;
+    const back = new Uint8Array(s.size);
+    const pending: number[] = [];
+    for (const u of unknowns) {
+      const q = this.stepOfUnknown[u];
+      if (!back[q]) {
+        back[q] = 1;
+        pending.push(q);
+      }
+    }
+    while (pending.length > 0) {
+      const p = pending.pop()!;
+      for (let k = diagonalPosition[p] + 1; k < rowStart[p + 1]; k++) {
+        const c = columnOf[k];
+        if (!back[c]) {
+          back[c] = 1;
+          pending.push(c);
+        }
+      }
+    }
+    const forward = back.slice();
+    for (let p = 0; p < s.size; p++) if (forward[p]) pending.push(p);
+    while (pending.length > 0) {
+      const p = pending.pop()!;
+      for (let k = rowStart[p]; k < diagonalPosition[p]; k++) {
+        const c = columnOf[k];
+        if (!forward[c]) {
+          forward[c] = 1;
+          pending.push(c);
+        }
+      }
+    }
+    const steps = (marked: Uint8Array) => {
+      const out: number[] = [];
+      for (let p = 0; p < s.size; p++) if (marked[p]) out.push(p);
+      return Int32Array.from(out);
+    };
+    return { forwardSteps: steps(forward), backSteps: steps(back).reverse() };
+  }
+
+  /**
+   * `solve` restricted to a plan's steps: afterwards solutionRe/solutionIm are valid for the plan's unknowns
+   * only. Each visited step does exactly the arithmetic `solve` does there, so those unknowns come out the same.
+   */
+  solvePlanned(rhsRe: Float64Array, rhsIm: Float64Array, plan: OutputPlan): void {
+    const s = this.structure;
+    const re = this.re;
+    const im = this.im;
+    const wr = this.workRe;
+    const wi = this.workIm;
+    const { rowStart, columnOf, diagonalPosition, originalRowOf } = s;
+    const { forwardSteps, backSteps } = plan;
+    for (let j = 0; j < forwardSteps.length; j++) {
+      const p = forwardSteps[j];
+      const from = originalRowOf[p] << LANE_SHIFT;
+      let s0r = rhsRe[from];
+      let s0i = rhsIm[from];
+      let s1r = rhsRe[from + 1];
+      let s1i = rhsIm[from + 1];
+      let s2r = rhsRe[from + 2];
+      let s2i = rhsIm[from + 2];
+      let s3r = rhsRe[from + 3];
+      let s3i = rhsIm[from + 3];
+      const diagonal = diagonalPosition[p];
+      for (let k = rowStart[p]; k < diagonal; k++) {
+        const c = columnOf[k] << LANE_SHIFT;
+        const kk = k << LANE_SHIFT;
+        s0r -= re[kk] * wr[c] - im[kk] * wi[c];
+        s0i -= re[kk] * wi[c] + im[kk] * wr[c];
+        s1r -= re[kk + 1] * wr[c + 1] - im[kk + 1] * wi[c + 1];
+        s1i -= re[kk + 1] * wi[c + 1] + im[kk + 1] * wr[c + 1];
+        s2r -= re[kk + 2] * wr[c + 2] - im[kk + 2] * wi[c + 2];
+        s2i -= re[kk + 2] * wi[c + 2] + im[kk + 2] * wr[c + 2];
+        s3r -= re[kk + 3] * wr[c + 3] - im[kk + 3] * wi[c + 3];
+        s3i -= re[kk + 3] * wi[c + 3] + im[kk + 3] * wr[c + 3];
+      }
+      const at = p << LANE_SHIFT;
+      wr[at] = s0r;
+      wi[at] = s0i;
+      wr[at + 1] = s1r;
+      wi[at + 1] = s1i;
+      wr[at + 2] = s2r;
+      wi[at + 2] = s2i;
+      wr[at + 3] = s3r;
+      wi[at + 3] = s3i;
+    }
+    const invRe = this.inversePivotRe;
+    const invIm = this.inversePivotIm;
+    for (let j = 0; j < backSteps.length; j++) {
+      const p = backSteps[j];
       const at = p << LANE_SHIFT;
       let s0r = wr[at];
       let s0i = wi[at];
