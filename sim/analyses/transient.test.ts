@@ -96,7 +96,11 @@ describe("transient integration", () => {
     );
     const run = new TransientRun(compiled, op, { start: "op", maxStep: 1e-4, drive: null });
     run.advance(0.01);
-    for (let i = 0; i < op.x.length; i++) expect(Math.abs(run.x[i] - op.x[i])).toBeLessThan(1e-9 + 1e-9 * Math.abs(op.x[i]));
+    // each time point is exact to the Newton step tolerance (1e-9 relative); allow ten of them over the run
+    const STEADY_TOLERANCE = 1e-8;
+    for (let i = 0; i < op.x.length; i++) {
+      expect(Math.abs(run.x[i] - op.x[i])).toBeLessThan(STEADY_TOLERANCE * (1 + Math.abs(op.x[i])));
+    }
   });
 
   it("reports progress and stops when asked", () => {

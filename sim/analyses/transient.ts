@@ -125,8 +125,6 @@ export class TransientRun {
       devices,
       base,
       next: new Float64Array(n),
-      residual: new Float64Array(n),
-      rowScale: new Float64Array(n),
       isVoltage: createWorkspaceFlags(compiled.unknowns.map((u) => u.kind)),
     };
     this.trial = new Float64Array(n);
