@@ -19,6 +19,8 @@ declare module "vitest" {
     /** The throwaway cluster, so a test can stop and restart PostgreSQL under the running app. */
     pgDataDir: string;
     pgPort: number;
+    /** How the app reaches the storage fake (S3_ENDPOINT, S3_BUCKET, keys), so a test can look into the bucket. */
+    s3Env: Record<string, string>;
   }
 }
 
@@ -73,6 +75,7 @@ export default async function setup(project: TestProject) {
   project.provide("databaseUrl", services.databaseUrl);
   project.provide("pgDataDir", services.pgDataDir);
   project.provide("pgPort", services.pgPort);
+  project.provide("s3Env", services.s3?.env ?? {});
   return async () => {
     server.kill("SIGTERM");
     await new Promise((resolve) => setTimeout(resolve, 300));

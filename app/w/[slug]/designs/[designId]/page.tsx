@@ -116,6 +116,9 @@ export default async function DesignPage({ params, searchParams }: Props) {
                       <a href={exportUrl(rev.id)} className="text-xs underline" download>
                         Export
                       </a>
+                      <Link href={`/w/${slug}/designs/${designId}/revisions/${rev.id}/report`} className="text-xs underline">
+                        Sign-off report
+                      </Link>
                       {can(role, "revision.create") && head && rev.id !== head.id ? (
                         <RestoreRevisionButton workspaceId={workspaceId} designId={designId} revisionId={rev.id} number={rev.number} headRevisionId={head.id} />
                       ) : null}
