@@ -11,6 +11,9 @@ import { notify } from "./notifications";
 import { reviewPath, reviewPeople } from "./reviews";
 import { designRevisions, designs, remarks, reviews, users, workspaces } from "./schema";
 
+/** "Part COUT" → "part COUT" inside a sentence; part ids, nets and units keep their case. */
+const lowerFirst = (text: string) => text.charAt(0).toLowerCase() + text.slice(1);
+
 /**
  * Remarks and their threads. A remark belongs to the revision its review is about; replies point at the thread's
  * first remark and share its anchor. Resolving and reopening act on the thread (its first remark).
@@ -52,7 +55,7 @@ export async function addRemark(reviewId: string, actor: { id: string; name: str
       targetId: remark.id,
       detail: { reviewId, anchor },
     });
-    const where = anchorLabel(anchor).toLowerCase();
+    const where = lowerFirst(anchorLabel(anchor));
     await notify(tx, people, actor.id, {
       kind: parentId ? "remark.replied" : "remark.created",
       title: parentId ? `${actor.name ?? "Someone"} replied about ${where} on ${review.title}` : `${actor.name ?? "Someone"} remarked on ${where} of ${review.title}`,
@@ -102,7 +105,7 @@ export async function setRemarkResolved(remarkId: string, actor: { id: string; n
     });
     const people = root.reviewId ? await reviewPeople(tx, root.reviewId) : [];
     const repliers = await tx.select({ authorId: remarks.authorId }).from(remarks).where(eq(remarks.parentId, rootId));
-    const where = anchorLabel(root.anchor as RemarkAnchor).toLowerCase();
+    const where = lowerFirst(anchorLabel(root.anchor as RemarkAnchor));
     await notify(tx, [root.authorId, ...people, ...repliers.map((r) => r.authorId)], actor.id, {
       kind: "remark.resolved",
       title: `${actor.name ?? "Someone"} ${resolved ? "resolved" : "reopened"} the remark on ${where} of ${root.title}`,

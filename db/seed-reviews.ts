@@ -78,6 +78,6 @@ export async function seedReviews(db: SeedDb, workspaceId: string): Promise<void
     { userId: margit, kind: "review.requested", title: `Ines Caldero asks you to review ${DESIGN_TITLE} r${revision.number}`, body: "Please check the bias network.", link, emailStatus: "skipped" },
     { userId: orla, kind: "review.requested", title: `Ines Caldero asks you to review ${DESIGN_TITLE} r${revision.number}`, body: "Please check the bias network.", link, emailStatus: "skipped" },
     { userId: ines, kind: "remark.created", title: `Orla Penhallow remarked on 40 Hz – 120 Hz of ${DESIGN_TITLE}`, body: "The response lifts a little between 40 and 120 Hz.", link, emailStatus: "skipped" },
-    { userId: tomas, kind: "remark.created", title: `Margit Solberg remarked on part rg of ${DESIGN_TITLE}`, body: "RG at 2G2 with the 1 nF coupling cap…", link, emailStatus: "skipped" },
+    { userId: tomas, kind: "remark.created", title: `Margit Solberg remarked on part RG of ${DESIGN_TITLE}`, body: "RG at 2G2 with the 1 nF coupling cap…", link, emailStatus: "skipped" },
   ]);
 }
