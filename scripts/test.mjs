@@ -30,6 +30,21 @@ function ensureChromium() {
   }
 }
 
+/** The sign-off report test turns PDF pages into images with pdftoppm (Debian's poppler-utils). */
+function ensurePoppler() {
+  if (fs.existsSync("/usr/bin/pdftoppm")) return;
+  if (!isRoot) {
+    console.error("pdftoppm is missing. Install it: sudo apt-get update && sudo apt-get install -y poppler-utils");
+    process.exit(1);
+  }
+  console.log("Installing Debian's poppler-utils for the report tests (apt-get)…");
+  const env = { ...process.env, DEBIAN_FRONTEND: "noninteractive" };
+  for (const args of [["update"], ["install", "-y", "poppler-utils"]]) {
+    const result = spawnSync("apt-get", args, { stdio: "inherit", env });
+    if (result.status !== 0) process.exit(result.status ?? 1);
+  }
+}
+
 const totals = { passed: 0, failed: 0, skipped: 0 };
 const report = [];
 
@@ -74,6 +89,7 @@ ensureInstalled();
 fs.mkdirSync(outputDir, { recursive: true });
 const want = (name) => only.length === 0 || only.includes(name);
 if (want("app")) ensureChromium();
+if (want("integration")) ensurePoppler();
 if (want("typecheck")) runCheck("type check (tsc)", bin("tsc"), ["--noEmit", "-p", "tsconfig.json"]);
 if (want("lint")) runCheck("lint (biome)", bin("biome"), ["lint", "."]);
 for (const project of ["unit", "integration", "app"]) if (want(project)) runVitest(project);

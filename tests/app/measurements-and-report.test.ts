@@ -155,4 +155,20 @@ describe("a measurement on the bench", () => {
     fs.mkdirSync(out, { recursive: true });
     fs.writeFileSync(path.join(out, "la-47.pdf"), pdf);
   });
+
+  it("attaches the PDF to the revision's review, stored through the S3 client and served only as a download", async () => {
+    const { rows } = await pool.query("SELECT id FROM reviews WHERE revision_id = $1 LIMIT 1", [revisionId]);
+    expect(rows).toHaveLength(1);
+    const attached = await designer.fetch(`/api/workspaces/${workspaceId}/designs/${designId}/revisions/${revisionId}/report/attach`, { method: "POST", body: { reviewId: rows[0].id } });
+    expect(attached.status).toBe(201);
+    const { attachment } = await attached.json();
+    expect((await bucket.keys(`designs/${designId}/reports/`)).some((k) => k.endsWith(attachment.filename))).toBe(true);
+    const download = await designer.fetch(`/api/workspaces/${workspaceId}/designs/${designId}/attachments/${attachment.id}`);
+    expect(download.status).toBe(200);
+    expect(download.headers.get("content-disposition")).toMatch(/^attachment;/);
+    expect(download.headers.get("x-content-type-options")).toBe("nosniff");
+    expect(Buffer.from(await download.arrayBuffer()).subarray(0, 5).toString()).toBe("%PDF-");
+    const wrong = await designer.fetch(`/api/workspaces/${workspaceId}/designs/${designId}/revisions/${revisionId}/report/attach`, { method: "POST", body: { reviewId: "not-an-id" } });
+    expect(wrong.status).toBe(422);
+  });
 });
