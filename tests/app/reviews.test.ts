@@ -57,8 +57,30 @@ async function freshPage(): Promise<{ page: Page; close: () => Promise<void> }> 
   return { page, close: () => browser.close() };
 }
 
+/**
+ * The server closes idle keep-alive connections after a few seconds; a request sent on one at that moment fails
+ * with "other side closed" before the server read it (the headless run between calls leaves them idle). Such a
+ * request is sent once more on a fresh connection; any other failure stands.
+ */
+function retryClosedSocket(session: HttpSession): HttpSession {
+  return {
+    get cookie() {
+      return session.cookie;
+    },
+    async fetch(path, init) {
+      try {
+        return await session.fetch(path, init);
+      } catch (error) {
+        if ((error as { cause?: { code?: string } }).cause?.code !== "UND_ERR_SOCKET") throw error;
+        return session.fetch(path, init);
+      }
+    },
+  };
+}
+
 beforeAll(async () => {
-  as = await signInAll(baseUrl);
+  const sessions = await signInAll(baseUrl);
+  as = Object.fromEntries(Object.entries(sessions).map(([role, session]) => [role, retryClosedSocket(session)])) as typeof sessions;
   workspaceId = await workspaceIdOf(pool, DEMO_WORKSPACE.slug);
   const { rows } = await pool.query("SELECT id, email FROM users WHERE email = ANY($1)", [["orla@larkfield.example", "margit@larkfield.example"]]);
   for (const row of rows) ids[row.email.startsWith("orla") ? "orla" : "margit"] = row.id;
