@@ -37,8 +37,9 @@ export function BenchTopBar({
 
   return (
     <header className="flex flex-wrap items-center gap-x-3 gap-y-2 border-b border-rule bg-paper px-3 py-2">
-      <div className="min-w-0 flex-1">
-        <h1 className="truncate font-display text-base font-semibold text-ink" title={title}>
+      {/* a whole row on a phone, so a long title wraps instead of being cut off */}
+      <div className="min-w-0 basis-full sm:basis-0 sm:flex-1">
+        <h1 className="break-words font-display sm:truncate text-base font-semibold text-ink" title={title}>
           {title || "Untitled design"}
         </h1>
         <p className="text-[11px] text-ink-soft">

@@ -6,7 +6,7 @@
  * stay (read-only use).
  */
 import { ReactFlowProvider } from "@xyflow/react";
-import { Suspense, useMemo, useState } from "react";
+import { Suspense, useCallback, useMemo, useState } from "react";
 import { designsFetch, designUrl } from "@/components/designs/designs-api";
 import { BenchTopBar } from "./bench-top-bar";
 import { BenchCanvas } from "./canvas/bench-canvas";
@@ -16,11 +16,12 @@ import { type BenchDocument, openDocument, toExportFile } from "./document/docum
 import { importCircuitText } from "./document/import-file";
 import type { SimErrorJson } from "@/sim/errors";
 import { SheetPanel } from "./part-sheet/sheet-panel";
-import { BenchResults } from "./results";
+import { type BenchLiveState, BenchResults } from "./results";
 import { SaveDialog } from "./save/save-dialog";
 import { useDraft } from "./save/use-draft";
 import { StartFrom } from "./starting-points/start-from";
 import { BenchStoreProvider, useBench, useBenchStore } from "./store/bench-store-context";
+import { canvasProblem } from "./store/canvas-problem";
 import { structureProblem } from "./store/structure-check";
 import { Tray } from "./tray/tray";
 
@@ -68,7 +69,14 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
   const canSave = !readOnly && !!workspaceId && !!designId;
   const draft = useDraft({ designId, parentRevisionId: revision?.id ?? null, document, dirty, enabled: !readOnly });
 
-  const problem = useMemo(() => structureProblem(document.circuit, variant), [document.circuit, variant]);
+  // the live solve's error and operating point, told by the results below (null until the first solve answers)
+  const [live, setLive] = useState<BenchLiveState>({ error: null, op: null });
+  const onLiveState = useCallback((state: BenchLiveState) => setLive(state), []);
+  const structure = useMemo(() => structureProblem(document.circuit, variant), [document.circuit, variant]);
+  const problem = useMemo(
+    () => canvasProblem(structure, live.error, document.circuit),
+    [structure, live.error, document.circuit],
+  );
   const selectedPart =
     selection.parts.length === 1 ? document.circuit.parts.find((p) => p.id === selection.parts[0]) : undefined;
 
@@ -108,7 +116,7 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
           )
         }
       />
-      <CautionBanner circuit={document.circuit} />
+      <CautionBanner circuit={document.circuit} opNets={live.op?.nets ?? null} />
       {draft.offer && (
         <div
           className="flex flex-wrap items-center gap-2 border-b border-brass/40 bg-brass-light/40 px-4 py-1.5 text-sm"
@@ -172,7 +180,7 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
           </button>
         </div>
       )}
-      <div className="grid h-[62vh] min-h-[420px] grid-cols-1 border-b border-rule md:h-[calc(100vh-11rem)] md:max-h-[760px] md:grid-cols-[176px_minmax(0,1fr)_288px]">
+      <div className="grid h-[62vh] min-h-[420px] grid-cols-1 border-b border-rule md:h-[calc(100vh-11rem)] md:max-h-[760px] md:grid-cols-[176px_minmax(0,1fr)_288px] md:grid-rows-[minmax(0,1fr)]">
         <aside className="hidden min-h-0 overflow-y-auto border-r border-rule bg-paper-deep/40 md:block" aria-label="Tray panel">
           {!readOnly ? <Tray /> : <p className="p-3 text-xs text-ink-soft">Read-only: the tray is for designers.</p>}
         </aside>
@@ -213,6 +221,7 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
                 }
           }
           revisions={workspaceId && designId ? { workspaceId, designId } : undefined}
+          onLiveState={onLiveState}
         />
       </section>
       {saving && workspaceId && designId && (

@@ -18,7 +18,7 @@ import {
   ReactFlow,
   useReactFlow,
 } from "@xyflow/react";
-import { type DragEvent, type KeyboardEvent, useCallback, useMemo, useRef, useState } from "react";
+import { type DragEvent, type KeyboardEvent, useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { SimErrorJson } from "@/sim/errors";
 import { PART_KINDS, type PartKind } from "@/sim/circuit/types";
 import { GRID } from "../document/layout";
@@ -36,6 +36,8 @@ import { commandOfKey } from "./shortcuts";
 
 const NODE_TYPES = { part: PartNode, ground: GroundNode, netLabel: LabelNode };
 const FIT_OPTIONS = { padding: 0.2, maxZoom: 1.4 };
+/** The canvas is fitted again when its width changes by more than this share (a phone turned, a window snapped). */
+const REFIT_WIDTH_CHANGE = 0.25;
 
 function isTyping(target: EventTarget | null): boolean {
   const element = target as HTMLElement | null;
@@ -51,6 +53,27 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
   const [help, setHelp] = useState(false);
   // the canvas takes keyboard focus when its background is clicked, so shortcuts reach it
   const surface = useRef<HTMLElement>(null);
+
+  // a drawing fitted to a 1440-wide window is mostly off screen on a 390-wide one: refit on a large width change,
+  // but not on small ones, so a view the user zoomed into stays put while a window is nudged
+  useEffect(() => {
+    const element = surface.current;
+    if (!element || typeof ResizeObserver === "undefined") return;
+    let fittedWidth = element.clientWidth;
+    const observer = new ResizeObserver(() => {
+      const width = element.clientWidth;
+      if (width === 0 || fittedWidth === 0) {
+        fittedWidth = width;
+        return;
+      }
+      if (Math.abs(width - fittedWidth) / fittedWidth > REFIT_WIDTH_CHANGE) {
+        fittedWidth = width;
+        requestAnimationFrame(() => flow.fitView(FIT_OPTIONS));
+      }
+    });
+    observer.observe(element);
+    return () => observer.disconnect();
+  }, [flow]);
 
   const nodes = useMemo(
     () => toFlowNodes(document, selection, error, document.circuit.parameters),

@@ -77,7 +77,8 @@ function PartNodeView({ data, selected }: NodeProps<PartFlowNode>) {
           </Handle>
         );
       })}
-      <div className="pointer-events-none absolute left-1/2 top-full mt-1 -translate-x-1/2 whitespace-nowrap text-center leading-tight">
+      {/* on a paper ground, so a wire drawn under the designator or value never strikes through the text */}
+      <div className="pointer-events-none absolute left-1/2 top-full mt-1 -translate-x-1/2 whitespace-nowrap rounded-sm bg-paper/90 px-1 text-center leading-tight">
         <div className={`font-mono text-[11px] font-medium ${error ? "text-caution" : "text-ink"}`}>
           {part.id}
           {!part.enabled && <span className="ml-1 text-graphite">(off)</span>}

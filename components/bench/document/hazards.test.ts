@@ -31,4 +31,13 @@ describe("caution reasons", () => {
       { kind: "high-net", net: "c", volts: -75 },
     ]);
   });
+  it("with the operating point, still names a 48 V supply and a triode; an 80 V source without a role shows as its net", () => {
+    const triode = { id: "VT1", kind: "triode", pins: { a: "x", g: "0", k: "0" }, values: { mu: 30, k: 1e-3 } };
+    const parts = [source("V1", "48", "supply"), source("V2", "80"), triode];
+    expect(hazardReasons(circuit(parts), { x: 80, "0": 0 })).toEqual([
+      { kind: "supply", part: "V1", volts: 48 },
+      { kind: "triode", part: "VT1" },
+      { kind: "high-net", net: "x", volts: 80 },
+    ]);
+  });
 });

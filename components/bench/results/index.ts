@@ -9,7 +9,7 @@ export { withDestination } from "../destinations/with-destination";
 export { ExplainPanel } from "../explain/explain-panel";
 export type { BenchSolveError, LiveResult } from "../solver/protocol";
 export { type LiveSolveState, useLiveSolve } from "../solver/use-live-solve";
-export { BenchResults, type BenchResultsProps } from "./bench-results";
+export { type BenchLiveState, BenchResults, type BenchResultsProps } from "./bench-results";
 export { FiguresPanel } from "./figures-panel";
 export { OperatingPointPanel, WarningsList } from "./operating-point-panel";
 export { SolveErrorPanel } from "./solve-error-panel";

@@ -15,13 +15,14 @@ import { SYMBOL_BOXES } from "../symbols/pin-layout";
 import { TRAY_GROUPS, TRAY_HINTS, type TrayItem } from "./tray-groups";
 
 const LABELS: Record<TrayItem, string> = { ...KIND_LABELS, ground: "Ground", label: "Net label" };
+// two lines at most in the tray's width, so every entry fits at 1440×900 (the title says it in full)
 const SHORT: Partial<Record<TrayItem, string>> = {
-  vcvs: "Voltage-controlled V source",
-  vccs: "Voltage-controlled I source",
+  vcvs: "Controlled voltage source",
+  vccs: "Controlled current source",
 };
 
 function TrayIcon({ item }: { item: TrayItem }) {
-  if (item === "ground") return <GroundSymbol className="h-7 w-7" />;
+  if (item === "ground") return <GroundSymbol className="h-6 w-6" />;
   if (item === "label") {
     return (
       <span className="flex h-5 items-center rounded-r-full border border-trace bg-trace-light px-1.5 font-mono text-[9px]">
@@ -30,9 +31,9 @@ function TrayIcon({ item }: { item: TrayItem }) {
     );
   }
   const box = SYMBOL_BOXES[item];
-  const scale = Math.min(40 / box.width, 28 / box.height);
+  const scale = Math.min(40 / box.width, 24 / box.height);
   return (
-    <span className="flex h-7 w-10 items-center justify-center">
+    <span className="flex h-6 w-10 items-center justify-center">
       <span style={{ transform: `scale(${scale})`, width: box.width, height: box.height }} className="block shrink-0">
         <PartSymbol kind={item as PartKind} />
       </span>
@@ -59,7 +60,7 @@ export function Tray() {
   return (
     <nav aria-label="Tray" className="h-full overflow-y-auto px-2 py-3">
       {TRAY_GROUPS.map((group) => (
-        <section key={group.title} className="mb-3">
+        <section key={group.title} className="mb-2">
           <h3 className="mb-1 px-1 font-display text-[11px] tracking-wide text-brass-deep uppercase">{group.title}</h3>
           <ul className="space-y-0.5">
             {group.items.map((item) => (
@@ -74,7 +75,7 @@ export function Tray() {
                   onClick={() => add(item)}
                   title={`${LABELS[item]}: ${TRAY_HINTS[item]}. Drag onto the canvas or click to add.`}
                   data-tray-item={item}
-                  className="flex w-full cursor-grab items-center gap-2 rounded px-1 py-1 text-left text-[13px] text-ink hover:bg-paper-deep active:cursor-grabbing"
+                  className="flex w-full cursor-grab items-center gap-2 rounded px-1 py-0.5 text-left text-[13px] text-ink hover:bg-paper-deep active:cursor-grabbing"
                 >
                   <span className="text-ink-soft">
                     <TrayIcon item={item} />
