@@ -1,18 +1,21 @@
 /**
  * The browser's side of Backplate's API: JSON in, JSON out, and the server's error shape
- * `{ error: { code, message, fields? } }` turned into an ApiError a form or a query can show.
+ * `{ error: { code, message, fields?, detail? } }` turned into an ApiError a form or a query can show (a 409's
+ * `detail` names the head revision, who saved it and when).
  */
 export class ApiError extends Error {
   readonly status: number;
   readonly code: string;
   readonly fields?: Record<string, string>;
+  readonly detail?: unknown;
 
-  constructor(status: number, code: string, message: string, fields?: Record<string, string>) {
+  constructor(status: number, code: string, message: string, fields?: Record<string, string>, detail?: unknown) {
     super(message);
     this.name = "ApiError";
     this.status = status;
     this.code = code;
     this.fields = fields;
+    this.detail = detail;
   }
 }
 
@@ -37,6 +40,7 @@ export async function apiFetch<T>(url: string, init: { method?: string; body?: u
       error?.code ?? "unavailable",
       error?.message ?? `The server answered ${response.status}. Try again in a moment.`,
       error?.fields,
+      error?.detail,
     );
   }
   return data as T;
