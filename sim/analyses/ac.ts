@@ -14,6 +14,7 @@ import { type OutputPlan, SparseLuComplexLanes, SWEEP_LANES } from "../mna/spars
 import type { AcResult, SimWarning } from "../results";
 import type { CompiledCircuit } from "./compile";
 import type { ComplexValue, SmallSignalModel } from "./small-signal";
+import type { SpreadSweep } from "./spread-sweep";
 
 /** Contract: warn when the drive closes a capsule gap by more than 10 %. */
 export const CAPSULE_GAP_WARNING_FRACTION = 0.1;
@@ -38,11 +39,20 @@ function decibelsOf(re: number, im: number): number {
   return toDecibels(Math.hypot(re, im));
 }
 
-export function runAc(model: SmallSignalModel, frequencies: ArrayLike<number>, pressure: number): AcResult {
+/**
+ * The response at `frequencies`. A Monte Carlo run passes the spread's reduced sweep (spread-sweep.ts), which
+ * answers when the run changed only what it expects and otherwise leaves the run to the ordinary sweep.
+ */
+export function runAc(
+  model: SmallSignalModel,
+  frequencies: ArrayLike<number>,
+  pressure: number,
+  spreadSweep?: SpreadSweep,
+): AcResult {
   const count = frequencies.length;
   const re = new Array<number>(count).fill(0);
   const im = new Array<number>(count).fill(0);
-  sweepFor(model).run(frequencies, pressure, re, im);
+  if (!spreadSweep?.sweep(model, frequencies, pressure, re, im)) sweepFor(model).run(frequencies, pressure, re, im);
   // Magnitude and phase only once the solves are done: the hot loop above stays free of transcendental calls.
   const magnitude_db = new Array<number>(count).fill(0);
   const phase_deg = new Array<number>(count).fill(0);

@@ -11,7 +11,7 @@ import {
   type ElaboratedCircuit,
   type FrequencyRequest,
 } from "../circuit/types";
-import type { SimulationResult } from "../results";
+import type { SimulationResult, SpreadResult } from "../results";
 import { runAc } from "./ac";
 import { type CompiledCircuit, compileCircuit } from "./compile";
 import { computeFigures } from "./figures";
@@ -21,6 +21,7 @@ import { selfNoiseDbaSpl } from "./noise-figures";
 import { type OperatingPoint, OperatingPointSolver, reportOperatingPoint } from "./op";
 import { SmallSignalModel } from "./small-signal";
 import { runSpread } from "./spread";
+import { SpreadSweep } from "./spread-sweep";
 import type { RunControl } from "./transient";
 import { solveLargeSignal } from "./transient-large-signal";
 
@@ -32,8 +33,19 @@ export const DEFAULT_PRESSURE_PA = 1;
  * count) as the plain array the analyses and their JSON results take.
  */
 function expandFrequencies(request: FrequencyRequest): number[] {
-  return Array.from(expandFrequencyRequest(request));
+  let list = expanded.get(request);
+  if (!list) {
+    list = Array.from(expandFrequencyRequest(request));
+    expanded.set(request, list);
+  }
+  return list;
 }
+
+/**
+ * Expanded lists by request: a spread repeats the same requests a thousand times. The lists are read, never
+ * written, by the analyses; the JSON results copy them (ac.ts), so sharing one is safe.
+ */
+const expanded = new WeakMap<FrequencyRequest, number[]>();
 
 export interface SolveOptions {
   /** produce the `op` document when op is requested (Monte Carlo runs skip it) */
@@ -45,6 +57,8 @@ export interface SolveOptions {
    * analyses only), with a Web Worker's progress callback and cancellation check
    */
   largeSignal?: RunControl;
+  /** a Monte Carlo run's reduced AC sweep (spread-sweep.ts), shared by the runs of one spread */
+  spreadSweep?: SpreadSweep;
 }
 
 /** One pass of the requested analyses on a compiled circuit with the values its parts hold now. */
@@ -53,7 +67,7 @@ export function solveAnalyses(
   solver: OperatingPointSolver,
   analyses: AnalysisRequests,
   options: SolveOptions,
-): { result: SimulationResult; nominal: OperatingPoint } {
+): { result: SimulationResult; nominal: OperatingPoint; model: SmallSignalModel } {
   const points = new Map<number, OperatingPoint>();
   const operatingPointAt = (temperature: number): OperatingPoint => {
     let op = points.get(temperature);
@@ -72,7 +86,9 @@ export function solveAnalyses(
   const nominal = operatingPointAt(acTemperature);
   const model = new SmallSignalModel(compiled, nominal);
   const pressure = analyses.ac?.pressure ?? DEFAULT_PRESSURE_PA;
-  if (analyses.ac) result.ac = runAc(model, expandFrequencies(analyses.ac.frequencies), pressure);
+  if (analyses.ac) {
+    result.ac = runAc(model, expandFrequencies(analyses.ac.frequencies), pressure, options.spreadSweep);
+  }
   // The sweep just solved brackets the corners (corners.ts): far fewer single-frequency solves than a search.
   result.figures = computeFigures(model, pressure, result.ac);
   if (analyses.noise) {
@@ -84,21 +100,37 @@ export function solveAnalyses(
     );
   }
   if (options.largeSignal) solveLargeSignal(compiled, operatingPointAt, analyses, result, options.largeSignal);
-  return { result, nominal };
+  return { result, nominal, model };
 }
 
 export function simulate(circuit: ElaboratedCircuit, control: RunControl = {}): SimulationResult {
   const compiled = compileCircuit(circuit);
   const solver = new OperatingPointSolver(compiled);
   const { spread, ...analyses } = circuit.analyses;
-  const { result, nominal } = solveAnalyses(compiled, solver, analyses, { reportOp: true, largeSignal: control });
-  if (spread) {
-    result.spread = runSpread(
-      compiled,
-      spread,
-      (warmStart) => solveAnalyses(compiled, solver, analyses, { reportOp: false, warmStart }).result,
-      nominal.x,
-    );
-  }
+  const { result, nominal, model } = solveAnalyses(compiled, solver, analyses, {
+    reportOp: true,
+    largeSignal: control,
+  });
+  if (spread) result.spread = spreadAround(compiled, solver, analyses, spread, { nominal, model });
   return result;
+}
+
+/**
+ * The Monte Carlo spread of the small-signal analyses around a nominal pass: every run warm-starts its operating
+ * point from the nominal one, and its AC sweeps share one reduced sweep built from the nominal model.
+ */
+export function spreadAround(
+  compiled: CompiledCircuit,
+  solver: OperatingPointSolver,
+  analyses: Omit<AnalysisRequests, "spread">,
+  spread: { runs: number; seed: number },
+  nominal: { nominal: OperatingPoint; model: SmallSignalModel },
+): SpreadResult {
+  const spreadSweep = new SpreadSweep(nominal.model);
+  return runSpread(
+    compiled,
+    spread,
+    (warmStart) => solveAnalyses(compiled, solver, analyses, { reportOp: false, warmStart, spreadSweep }).result,
+    nominal.nominal.x,
+  );
 }

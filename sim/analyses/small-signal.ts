@@ -115,8 +115,8 @@ export class SmallSignalModel {
   }
 }
 
-/** The drive context, reused for every frequency (no allocation per point). */
-class DriveContext implements AcDriveContext {
+/** The drive context, reused for every frequency (no allocation per point); also the spread's reduced sweep's. */
+export class DriveContext implements AcDriveContext {
   readonly x: Float64Array;
   frequency = 0;
   pressure = 0;

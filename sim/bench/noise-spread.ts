@@ -10,8 +10,7 @@ import { compileCircuit } from "../analyses/compile";
 import { runNoise } from "../analyses/noise";
 import { AdjointNoiseSystem } from "../analyses/noise-adjoint";
 import { OperatingPointSolver } from "../analyses/op";
-import { solveAnalyses } from "../analyses/simulate";
-import { runSpread } from "../analyses/spread";
+import { solveAnalyses, spreadAround } from "../analyses/simulate";
 import type { AnalysisRequests, ElaboratedCircuit } from "../circuit/types";
 
 /** Median and best (fastest) of `repeats` timed runs after `warmup` untimed ones, ms: the machine is shared, so the
@@ -74,14 +73,8 @@ export function spreadCase(name: string, circuit: ElaboratedCircuit): ExtraBench
     op: { temperature: 298.15 },
     ac: { frequencies: { kind: "list", frequencies }, pressure: 1, temperature: 298.15 },
   };
-  const { nominal } = solveAnalyses(compiled, solver, analyses, { reportOp: false });
-  const run = () =>
-    runSpread(
-      compiled,
-      { runs: SPREAD_RUNS, seed: 1 },
-      (warmStart) => solveAnalyses(compiled, solver, analyses, { reportOp: false, warmStart }).result,
-      nominal.x,
-    );
+  const nominal = solveAnalyses(compiled, solver, analyses, { reportOp: false });
+  const run = () => spreadAround(compiled, solver, analyses, { runs: SPREAD_RUNS, seed: 1 }, nominal);
   const ms = timed(run, 1, 5);
   return {
     name,

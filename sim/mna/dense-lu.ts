@@ -25,6 +25,11 @@ export class DenseLuComplex {
     this.transposedWorkIm = new Float64Array(size);
   }
 
+  /** After `factor`: the original row eliminated at each step (the order OrderedDenseLu can repeat). */
+  rowOrder(): Int32Array {
+    return Int32Array.from(this.rowOfStep);
+  }
+
   clear(): void {
     this.re.fill(0);
     this.im.fill(0);
