@@ -24,7 +24,9 @@
  */
 import type { Device } from "../devices/device";
 import { DenseLuComplex } from "../mna/dense-lu";
-import { OrderedLu, type OrderedLuPlan, planOrderedLu } from "../mna/ordered-lu";
+import { type OrderedLuPlan, planOrderedLu } from "../mna/ordered-lu";
+import { OrderedLuLanes } from "../mna/ordered-lu-lanes";
+import { SWEEP_LANES } from "../mna/sparse-lu-complex-lanes";
 import { SingularMatrixError } from "../mna/singular";
 import type { SparseStructure } from "../mna/sparse-structure";
 import { type ComplexValue, DriveContext, type SmallSignalModel } from "./small-signal";
@@ -87,7 +89,16 @@ export class SpreadSweep {
   private drivenBlock1: Int32Array = new Int32Array(0);
   private terms: FrequencyTerms[] = [];
   private termsFor: ArrayLike<number> | null = null;
-  private ordered: OrderedLu = new OrderedLu(0);
+  private lanes: OrderedLuLanes = new OrderedLuLanes(0);
+  private laneB2Re: Float64Array = new Float64Array(0);
+  private laneB2Im: Float64Array = new Float64Array(0);
+  private laneX2Re: Float64Array = new Float64Array(0);
+  private laneX2Im: Float64Array = new Float64Array(0);
+  private readonly laneOutRe = new Float64Array(SWEEP_LANES);
+  private readonly laneOutIm = new Float64Array(SWEEP_LANES);
+  /** y·b1 of the last reducedRightHandSide */
+  private outputRe = 0;
+  private outputIm = 0;
   private pivoting: DenseLuComplex = new DenseLuComplex(0);
   private readonly rhsRe: Float64Array;
   private readonly rhsIm: Float64Array;
@@ -145,65 +156,153 @@ export class SpreadSweep {
     outIm: number[],
   ): boolean {
     if (this.disabled || !this.prepare(model, frequencies)) return false;
-    const k = this.block2.length;
-    const n1 = this.block1.length;
     const { conductance, reactance } = model;
-    const { rhsRe, rhsIm, b2Re, b2Im, x2Re, x2Im, block2, ordered, drivenRows, drivenBlock1 } = this;
     const { varyingPositions, deltaG, deltaC, nominalG, nominalC } = this;
     for (let e = 0; e < varyingPositions.length; e++) {
       const p = varyingPositions[e];
       deltaG[e] = conductance[p] - nominalG[p];
       deltaC[e] = reactance[p] - nominalC[p];
     }
-    const drive = new DriveContext(model.op.x, rhsRe, rhsIm);
+    const drive = new DriveContext(model.op.x, this.rhsRe, this.rhsIm);
     drive.pressure = pressure;
-    for (let f = 0; f < frequencies.length; f++) {
-      const t = this.terms[f];
-      this.loadReduced(ordered.re, ordered.im, t);
-      // The drivers write only the rows recorded in split(): clear just those.
-      for (let q = 0; q < drivenRows.length; q++) {
-        rhsRe[drivenRows[q]] = 0;
-        rhsIm[drivenRows[q]] = 0;
-      }
-      drive.frequency = frequencies[f];
-      for (const d of this.drivers) d.stampAcDrive!(drive);
-      let outputRe = 0;
-      let outputIm = 0;
-      for (let i = 0; i < k; i++) {
-        b2Re[i] = rhsRe[block2[i]];
-        b2Im[i] = rhsIm[block2[i]];
-      }
-      for (let q = 0; q < drivenBlock1.length; q++) {
-        const r = drivenBlock1[q];
-        const br = rhsRe[this.block1[r]];
-        const bi = rhsIm[this.block1[r]];
-        if (br === 0 && bi === 0) continue;
-        outputRe += t.yRe[r] * br - t.yIm[r] * bi;
-        outputIm += t.yRe[r] * bi + t.yIm[r] * br;
-        for (let i = 0; i < k; i++) {
-          const at = i * n1 + r;
-          b2Re[i] -= t.tRe[at] * br - t.tIm[at] * bi;
-          b2Im[i] -= t.tRe[at] * bi + t.tIm[at] * br;
-        }
-      }
-      if (ordered.factor(t.plan!)) {
-        ordered.solve(b2Re, b2Im, x2Re, x2Im);
-      } else if (!this.solvePivoting(t)) {
-        // This run's reduced system is singular at this frequency: the model's own solve names the cause.
-        model.response(frequencies[f], pressure, this.fallback);
-        outRe[f] = this.fallback.re;
-        outIm[f] = this.fallback.im;
+    const count = frequencies.length;
+    for (let start = 0; start < count; start += SWEEP_LANES) {
+      const used = Math.min(SWEEP_LANES, count - start);
+      const plan = this.terms[start].plan!;
+      let shared = true;
+      for (let b = 1; b < used; b++) shared &&= this.terms[start + b].plan === plan;
+      if (!shared) {
+        // Neighbours with different pivot orders (rare): one frequency at a time.
+        for (let b = 0; b < used; b++) this.sweepOne(model, drive, start + b, frequencies, pressure, outRe, outIm);
         continue;
       }
-      for (let i = 0; i < k; i++) {
-        outputRe += t.uRe[i] * x2Re[i] - t.uIm[i] * x2Im[i];
-        outputIm += t.uRe[i] * x2Im[i] + t.uIm[i] * x2Re[i];
-      }
-      outRe[f] = outputRe;
-      outIm[f] = outputIm;
+      this.sweepGroup(model, drive, start, used, frequencies, pressure, outRe, outIm);
     }
     this.reducedRuns++;
     return true;
+  }
+
+  /** SWEEP_LANES neighbouring frequencies sharing one plan (a short last group repeats its last frequency). */
+  private sweepGroup(
+    model: SmallSignalModel,
+    drive: DriveContext,
+    start: number,
+    used: number,
+    frequencies: ArrayLike<number>,
+    pressure: number,
+    outRe: number[],
+    outIm: number[],
+  ): void {
+    const k = this.block2.length;
+    const { lanes, laneB2Re, laneB2Im, laneX2Re, laneX2Im, varyingAt, deltaG, deltaC } = this;
+    const { re, im } = lanes;
+    const plan = this.terms[start].plan!;
+    for (let b = 0; b < SWEEP_LANES; b++) {
+      const f = start + Math.min(b, used - 1);
+      const t = this.terms[f];
+      for (let at = 0; at < k * k; at++) {
+        re[(at << 2) + b] = t.s0Re[at];
+        im[(at << 2) + b] = t.s0Im[at];
+      }
+      for (let e = 0; e < varyingAt.length; e++) {
+        re[(varyingAt[e] << 2) + b] += deltaG[e];
+        im[(varyingAt[e] << 2) + b] += t.omega * deltaC[e];
+      }
+      this.reducedRightHandSide(drive, t, frequencies[f]);
+      for (let i = 0; i < k; i++) {
+        laneB2Re[(i << 2) + b] = this.b2Re[i];
+        laneB2Im[(i << 2) + b] = this.b2Im[i];
+      }
+      this.laneOutRe[b] = this.outputRe;
+      this.laneOutIm[b] = this.outputIm;
+    }
+    const failed = lanes.factor(plan);
+    lanes.solve(laneB2Re, laneB2Im, laneX2Re, laneX2Im);
+    for (let b = 0; b < used; b++) {
+      const f = start + b;
+      if (failed & (1 << b)) {
+        this.sweepOne(model, drive, f, frequencies, pressure, outRe, outIm);
+        continue;
+      }
+      const t = this.terms[f];
+      let sr = this.laneOutRe[b];
+      let si = this.laneOutIm[b];
+      for (let i = 0; i < k; i++) {
+        const xr = laneX2Re[(i << 2) + b];
+        const xi = laneX2Im[(i << 2) + b];
+        sr += t.uRe[i] * xr - t.uIm[i] * xi;
+        si += t.uRe[i] * xi + t.uIm[i] * xr;
+      }
+      outRe[f] = sr;
+      outIm[f] = si;
+    }
+  }
+
+  /** One frequency with partial pivoting (a lane whose nominal order was not safe, or a group without one plan). */
+  private sweepOne(
+    model: SmallSignalModel,
+    drive: DriveContext,
+    f: number,
+    frequencies: ArrayLike<number>,
+    pressure: number,
+    outRe: number[],
+    outIm: number[],
+  ): void {
+    const t = this.terms[f];
+    this.reducedRightHandSide(drive, t, frequencies[f]);
+    if (!this.solvePivoting(t)) {
+      // This run's reduced system is singular at this frequency: the model's own solve names the cause.
+      model.response(frequencies[f], pressure, this.fallback);
+      outRe[f] = this.fallback.re;
+      outIm[f] = this.fallback.im;
+      return;
+    }
+    let sr = this.outputRe;
+    let si = this.outputIm;
+    for (let i = 0; i < this.block2.length; i++) {
+      sr += t.uRe[i] * this.x2Re[i] - t.uIm[i] * this.x2Im[i];
+      si += t.uRe[i] * this.x2Im[i] + t.uIm[i] * this.x2Re[i];
+    }
+    outRe[f] = sr;
+    outIm[f] = si;
+  }
+
+  /**
+   * Stamp the drives at `frequency` and form b2 − T·b1 into b2Re/b2Im, and y·b1 (the output's block-1 part)
+   * into outputRe/outputIm.
+   */
+  private reducedRightHandSide(drive: DriveContext, t: FrequencyTerms, frequency: number): void {
+    const k = this.block2.length;
+    const n1 = this.block1.length;
+    const { rhsRe, rhsIm, b2Re, b2Im, block1, block2, drivenRows, drivenBlock1 } = this;
+    // The drivers write only the rows recorded in the constructor: clear just those.
+    for (let q = 0; q < drivenRows.length; q++) {
+      rhsRe[drivenRows[q]] = 0;
+      rhsIm[drivenRows[q]] = 0;
+    }
+    drive.frequency = frequency;
+    for (const d of this.drivers) d.stampAcDrive!(drive);
+    let outputRe = 0;
+    let outputIm = 0;
+    for (let i = 0; i < k; i++) {
+      b2Re[i] = rhsRe[block2[i]];
+      b2Im[i] = rhsIm[block2[i]];
+    }
+    for (let q = 0; q < drivenBlock1.length; q++) {
+      const r = drivenBlock1[q];
+      const br = rhsRe[block1[r]];
+      const bi = rhsIm[block1[r]];
+      if (br === 0 && bi === 0) continue;
+      outputRe += t.yRe[r] * br - t.yIm[r] * bi;
+      outputIm += t.yRe[r] * bi + t.yIm[r] * br;
+      for (let i = 0; i < k; i++) {
+        const at = i * n1 + r;
+        b2Re[i] -= t.tRe[at] * br - t.tIm[at] * bi;
+        b2Im[i] -= t.tRe[at] * bi + t.tIm[at] * br;
+      }
+    }
+    this.outputRe = outputRe;
+    this.outputIm = outputIm;
   }
 
   /** S = S₀ + ΔG + jω·ΔC for this run (deltaG/deltaC), into re/im (k × k row-major). */
@@ -300,7 +399,11 @@ export class SpreadSweep {
     this.deltaG = new Float64Array(positions.length);
     this.deltaC = new Float64Array(positions.length);
     this.drivenBlock1 = Int32Array.from(this.drivenRows.filter((u) => !inBlock2[u]).map((u) => this.indexInBlock[u]));
-    this.ordered = new OrderedLu(k);
+    this.lanes = new OrderedLuLanes(k);
+    this.laneB2Re = new Float64Array(k * SWEEP_LANES);
+    this.laneB2Im = new Float64Array(k * SWEEP_LANES);
+    this.laneX2Re = new Float64Array(k * SWEEP_LANES);
+    this.laneX2Im = new Float64Array(k * SWEEP_LANES);
     this.pivoting = new DenseLuComplex(k);
     this.b2Re = new Float64Array(k);
     this.b2Im = new Float64Array(k);

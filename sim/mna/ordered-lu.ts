@@ -1,16 +1,13 @@
 /**
- * Complex LU of a small matrix in a row order and a sparsity pattern fixed beforehand (static pivots), for many
- * systems that differ only a little from one whose partial-pivoting order is known — the Monte Carlo runs' reduced
- * systems (sim/analyses/spread-sweep.ts), each within a tolerance of the nominal one.
+ * The plan of a complex LU of a small matrix in a row order and a sparsity pattern fixed beforehand (static
+ * pivots), for many systems that differ only a little from one whose partial-pivoting order is known — the Monte
+ * Carlo runs' reduced systems (sim/analyses/spread-sweep.ts), each within a tolerance of the nominal one. The
+ * factorisation itself runs four systems at a time (ordered-lu-lanes.ts).
  *
  * No pivot search and no row swaps: step c eliminates with row `order[c]`, and only the entries the pattern (with
- * its fill in that order, worked out once when the plan is made) can hold are touched — the reduced systems of a
- * microphone circuit are about a third full. Each pivot is checked against the largest |entry| of the pivot row
- * from the pivot column on (STATIC_PIVOT_RELATIVE_TOLERANCE, as the sparse static-pivot LU does); a pivot below
- * that is not safe for these numbers and `factor` returns false, so the caller falls back to DenseLuComplex, which
- * pivots. Storage: row-major split re/im arrays of size × size, overwritten by the factors.
+ * its fill in that order, worked out here once) can hold are touched — the reduced systems of a microphone circuit
+ * are about a third full. Indices are into a row-major size × size matrix.
  */
-import { STATIC_PIVOT_RELATIVE_TOLERANCE } from "./pivot-tolerance";
 
 /** The elimination program of one row order on one pattern. */
 export interface OrderedLuPlan {
@@ -102,103 +99,4 @@ export function planOrderedLu(size: number, pattern: Uint8Array, order: Int32Arr
     upperAt: Int32Array.from(upperAt),
     upperColumn: Int32Array.from(upperColumn),
   };
-}
-
-export class OrderedLu {
-  readonly size: number;
-  readonly re: Float64Array;
-  readonly im: Float64Array;
-  private plan: OrderedLuPlan | null = null;
-  private readonly inverseRe: Float64Array;
-  private readonly inverseIm: Float64Array;
-  private readonly workRe: Float64Array;
-  private readonly workIm: Float64Array;
-
-  constructor(size: number) {
-    this.size = size;
-    this.re = new Float64Array(size * size);
-    this.im = new Float64Array(size * size);
-    this.inverseRe = new Float64Array(size);
-    this.inverseIm = new Float64Array(size);
-    this.workRe = new Float64Array(size);
-    this.workIm = new Float64Array(size);
-  }
-
-  /**
-   * Factor the loaded matrix by `plan` (entries outside the plan's pattern must be zero). False when a pivot is too
-   * small for its row; the factors are then meaningless.
-   */
-  factor(plan: OrderedLuPlan): boolean {
-    const n = this.size;
-    const { re, im, inverseRe, inverseIm } = this;
-    const { pivotAt, pivotRowStart, pivotRowEntries, eliminationStart, multiplierAt } = plan;
-    const { updateStart, updateSource, updateTarget } = plan;
-    this.plan = plan;
-    const tol2 = STATIC_PIVOT_RELATIVE_TOLERANCE * STATIC_PIVOT_RELATIVE_TOLERANCE;
-    for (let c = 0; c < n; c++) {
-      let rowMax2 = 0;
-      for (let q = pivotRowStart[c]; q < pivotRowStart[c + 1]; q++) {
-        const at = pivotRowEntries[q];
-        const a2 = re[at] * re[at] + im[at] * im[at];
-        if (a2 > rowMax2) rowMax2 = a2;
-      }
-      const pr = re[pivotAt[c]];
-      const pi = im[pivotAt[c]];
-      const mag2 = pr * pr + pi * pi;
-      if (!(mag2 > 0) || mag2 < tol2 * rowMax2) return false;
-      const invRe = pr / mag2;
-      const invIm = -pi / mag2;
-      inverseRe[c] = invRe;
-      inverseIm[c] = invIm;
-      for (let e = eliminationStart[c]; e < eliminationStart[c + 1]; e++) {
-        const m = multiplierAt[e];
-        const ar = re[m];
-        const ai = im[m];
-        const lr = ar * invRe - ai * invIm;
-        const li = ar * invIm + ai * invRe;
-        re[m] = lr;
-        im[m] = li;
-        for (let u = updateStart[e]; u < updateStart[e + 1]; u++) {
-          const src = updateSource[u];
-          const dst = updateTarget[u];
-          const sr = re[src];
-          const si = im[src];
-          re[dst] -= lr * sr - li * si;
-          im[dst] -= lr * si + li * sr;
-        }
-      }
-    }
-    return true;
-  }
-
-  /** Solve A·x = b with the factors of the last successful `factor`. */
-  solve(rhsRe: ArrayLike<number>, rhsIm: ArrayLike<number>, solRe: Float64Array, solIm: Float64Array): void {
-    const n = this.size;
-    const { re, im, inverseRe, inverseIm, workRe, workIm } = this;
-    const { order, lowerStart, lowerAt, lowerColumn, upperStart, upperAt, upperColumn } = this.plan!;
-    for (let c = 0; c < n; c++) {
-      let sr = rhsRe[order[c]];
-      let si = rhsIm[order[c]];
-      for (let q = lowerStart[c]; q < lowerStart[c + 1]; q++) {
-        const at = lowerAt[q];
-        const j = lowerColumn[q];
-        sr -= re[at] * workRe[j] - im[at] * workIm[j];
-        si -= re[at] * workIm[j] + im[at] * workRe[j];
-      }
-      workRe[c] = sr;
-      workIm[c] = si;
-    }
-    for (let c = n - 1; c >= 0; c--) {
-      let sr = workRe[c];
-      let si = workIm[c];
-      for (let q = upperStart[c]; q < upperStart[c + 1]; q++) {
-        const at = upperAt[q];
-        const j = upperColumn[q];
-        sr -= re[at] * solRe[j] - im[at] * solIm[j];
-        si -= re[at] * solIm[j] + im[at] * solRe[j];
-      }
-      solRe[c] = sr * inverseRe[c] - si * inverseIm[c];
-      solIm[c] = sr * inverseIm[c] + si * inverseRe[c];
-    }
-  }
 }

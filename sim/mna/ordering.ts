@@ -62,8 +62,6 @@ export function minimumDegreeOrder(
     positionOf[best] = step;
     neighboursAtElimination.push(neighbours);
   }
-  const upperNeighbours = neighboursAtElimination.map((list) =>
-    Int32Array.from(list.map((v) => positionOf[v])).sort(),
-  );
+  const upperNeighbours = neighboursAtElimination.map((list) => Int32Array.from(list.map((v) => positionOf[v])).sort());
   return { order, positionOf, upperNeighbours };
 }
