@@ -183,6 +183,20 @@ async function checkHistory(pool: Pool, designId: string, firstId: string, winne
   };
 }
 
+/**
+ * Waits until the app answers /api/health quickly again (or 30 s pass): autocannon stops sending at the end of a
+ * scenario, but the server still works off what it had queued, which would otherwise count against the next one.
+ */
+async function settle(baseUrl: string): Promise<void> {
+  const deadline = Date.now() + 30_000;
+  while (Date.now() < deadline) {
+    const t0 = performance.now();
+    const ok = await fetch(`${baseUrl}/api/health`).then((r) => r.ok, () => false);
+    if (ok && performance.now() - t0 < 100) return;
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+}
+
 export async function runLoadtest(options: LoadtestOptions, log: (line: string) => void = () => {}): Promise<LoadtestReport> {
   const pool = new Pool({ connectionString: options.databaseUrl, max: 2 });
   try {
@@ -208,6 +222,7 @@ export async function runLoadtest(options: LoadtestOptions, log: (line: string) 
     ];
     const reads: ReadScenario[] = [];
     for (const [name, path] of scenarios) {
+      await settle(options.baseUrl);
       log(`${name}: ${path}`);
       const scenario = await readScenario(options, name, path, headers);
       log(formatRead(scenario));

