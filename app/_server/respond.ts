@@ -15,6 +15,24 @@ export function zodFields(error: ZodError): Record<string, string> {
   return fields;
 }
 
+/** Messages of node-postgres when the server cannot be reached or went away mid-query. */
+const UNREACHABLE_MESSAGE = /ECONNREFUSED|ECONNRESET|Connection terminated|connect ETIMEDOUT|timeout exceeded when trying to connect/i;
+/** SQLSTATEs of a server shutting down or starting up (57P01–57P03) and of a broken connection (class 08). */
+const UNREACHABLE_SQLSTATE = /^(57P0[123]|08\d{3})$/;
+
+/**
+ * Whether an error means PostgreSQL is down or restarting. Drizzle wraps the driver's error in one of its own
+ * ("Failed query: …") with the original as `cause`, so the whole cause chain is looked at.
+ */
+function databaseUnreachable(error: unknown): boolean {
+  for (let e: unknown = error, depth = 0; e && depth < 5; e = (e as { cause?: unknown }).cause, depth += 1) {
+    const { message, code } = e as { message?: unknown; code?: unknown };
+    if (typeof message === "string" && UNREACHABLE_MESSAGE.test(message)) return true;
+    if (typeof code === "string" && (UNREACHABLE_SQLSTATE.test(code) || code === "ECONNREFUSED" || code === "ECONNRESET")) return true;
+  }
+  return false;
+}
+
 export function toAppError(error: unknown): AppError {
   if (error instanceof AppError) return error;
   if (error instanceof ZodError) {
@@ -22,10 +40,7 @@ export function toAppError(error: unknown): AppError {
     const first = Object.entries(fields)[0];
     return new AppError("invalid_input", first ? `${first[0]}: ${first[1]}` : "The input is not valid.", { fields });
   }
-  const message = error instanceof Error ? error.message : String(error);
-  if (/ECONNREFUSED|Connection terminated|connect ETIMEDOUT|timeout exceeded when trying to connect/i.test(message)) {
-    return new AppError("unavailable", "The database is not answering. Try again in a moment.");
-  }
+  if (databaseUnreachable(error)) return new AppError("unavailable", "The database is not answering. Try again in a moment.");
   console.error(error);
   return new AppError("unavailable", "Something went wrong on the server. Try again; if it persists, tell an owner.");
 }

@@ -12,6 +12,7 @@ import { DEFAULT_CABLE_LENGTH_M, DESTINATION_PRESETS } from "@/components/bench/
 import { OVERLAY_COLOURS, PLOT_COLOURS } from "@/components/bench/plots/palette";
 import { formatFixed, formatSi } from "@/components/bench/results/format";
 import { runRevision } from "@/components/designs/run-revision";
+import { runSavedRevision } from "@/app/_server/revision-runs";
 import { type PlotSeries, plotGeometry } from "@/components/report/plot-geometry";
 import { anchorText, type ReportModel, type ReportPlot } from "@/components/report/report-model";
 import { schematicGeometry } from "@/components/report/schematic-geometry";
@@ -53,7 +54,7 @@ export async function loadReport(
   const [measured, record] = await Promise.all([listMeasurementCurves(workspaceId, designId), signOffRecord(workspaceId, designId, revisionId)]);
   const document = openDocument(revision.circuit, revision.layout);
   const hasStoredLayout = Boolean(revision.layout && Object.keys((revision.layout as { parts?: object }).parts ?? {}).length > 0);
-  const run = runRevision(revision.circuit);
+  const run = runSavedRevision(revision.id, revision.circuit);
   const doc = run.ok ? run.document : null;
   const f = doc?.figures ?? {};
 

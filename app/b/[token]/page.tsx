@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { RevisionReadout } from "@/components/designs/revision-readout";
-import { runRevision } from "@/components/designs/run-revision";
+import { runSavedRevision } from "@/app/_server/revision-runs";
 import { openBenchLink } from "../open-bench-link";
 
 export const dynamic = "force-dynamic";
@@ -17,7 +17,7 @@ export default async function BenchLinkPage({ params }: { params: Promise<{ toke
   if (opening.kind === "sign-in") redirect(`/sign-in?callbackUrl=${encodeURIComponent(`/b/${token}`)}`);
   const { link, revision } = opening;
   const view = link.view;
-  const run = runRevision(revision.circuit, view.variant);
+  const run = runSavedRevision(revision.id, revision.circuit, view.variant);
   return (
     <div className="mx-auto max-w-5xl space-y-6 px-4 py-8 sm:px-6">
       <header className="space-y-2 border-b border-rule pb-4">

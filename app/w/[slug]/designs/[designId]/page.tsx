@@ -11,7 +11,7 @@ import { formatTime } from "@/components/designs/format-time";
 import { Panel } from "@/components/designs/panel";
 import { RestoreRevisionButton } from "@/components/designs/restore-revision-button";
 import { RevisionReadout } from "@/components/designs/revision-readout";
-import { runRevision } from "@/components/designs/run-revision";
+import { runSavedRevision } from "@/app/_server/revision-runs";
 import { SaveRevisionForm } from "@/components/designs/save-revision-form";
 import { StatusBadge } from "@/components/designs/status-badge";
 import { getDesign } from "@/db/designs";
@@ -50,7 +50,7 @@ export default async function DesignPage({ params, searchParams }: Props) {
   const selectedSummary = revisions.find((rev) => rev.id === r) ?? revisions[0];
   const selected = selectedSummary && head && selectedSummary.id !== head.id ? await getRevision(workspaceId, designId, selectedSummary.id) : head;
   const parent = selected?.parentId ? await getRevision(workspaceId, designId, selected.parentId) : null;
-  const run = head ? runRevision(head.circuit) : null;
+  const run = head ? runSavedRevision(head.id, head.circuit) : null;
   const variants = Array.isArray(head?.circuit.variants)
     ? (head.circuit.variants as { name?: unknown }[]).map((v) => String(v.name ?? "")).filter(Boolean)
     : [];

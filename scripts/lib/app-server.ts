@@ -1,0 +1,67 @@
+/**
+ * Starts the built app (`next start`) on 127.0.0.1 and a free port, pointed at the services it is given, and waits
+ * until /api/health answers 200. Used by the app tests' global setup, their fault tests (which run a second server
+ * on services they can stop) and `npm run loadtest`.
+ */
+import { type ChildProcess, spawn } from "node:child_process";
+import path from "node:path";
+import { PROJECT_ROOT } from "./config";
+import { freePort } from "./postgres";
+
+const READY_TIMEOUT_MS = 60_000;
+
+export interface AppServer {
+  baseUrl: string;
+  /** what the server printed so far (for failure messages) */
+  log(): string;
+  stop(): Promise<void>;
+}
+
+async function waitForHealth(url: string, server: ChildProcess) {
+  const deadline = Date.now() + READY_TIMEOUT_MS;
+  while (Date.now() < deadline) {
+    if (server.exitCode !== null) throw new Error(`next start exited with code ${server.exitCode}`);
+    try {
+      const response = await fetch(`${url}/api/health`);
+      if (response.status === 200) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+  throw new Error(`The app did not answer at ${url}/api/health within ${READY_TIMEOUT_MS / 1000} s`);
+}
+
+/** `env` holds the services' variables (DATABASE_URL, SMTP_URL, S3_*) and anything else the server should see. */
+export async function startAppServer(options: { distDir: string; env: Record<string, string>; secret: string }): Promise<AppServer> {
+  const port = await freePort();
+  const baseUrl = `http://127.0.0.1:${port}`;
+  const server = spawn(path.join(PROJECT_ROOT, "node_modules", ".bin", "next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+    cwd: PROJECT_ROOT,
+    stdio: ["ignore", "pipe", "pipe"],
+    env: {
+      ...process.env,
+      ...options.env,
+      BACKPLATE_DIST_DIR: options.distDir,
+      NEXTAUTH_URL: baseUrl,
+      NEXTAUTH_SECRET: options.secret,
+      NEXT_TELEMETRY_DISABLED: "1",
+    },
+  });
+  let serverLog = "";
+  server.stdout?.on("data", (chunk) => (serverLog += chunk));
+  server.stderr?.on("data", (chunk) => (serverLog += chunk));
+  const stop = async () => {
+    if (server.exitCode !== null) return;
+    server.kill("SIGTERM");
+    await new Promise((resolve) => setTimeout(resolve, 300));
+    if (server.exitCode === null) server.kill("SIGKILL");
+  };
+  try {
+    await waitForHealth(baseUrl, server);
+  } catch (error) {
+    await stop();
+    throw new Error(`${error instanceof Error ? error.message : error}\n${serverLog}`);
+  }
+  return { baseUrl, log: () => serverLog, stop };
+}
