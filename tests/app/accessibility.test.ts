@@ -45,9 +45,17 @@ interface PageToCheck {
   path: () => string;
   /** what shows once the page has its content */
   ready: (page: Page) => Promise<unknown>;
+  /** a state of the page reached by a person's action (a tab, a selected part, an open dialog) */
+  act?: (page: Page) => Promise<unknown>;
 }
 
 const heading = (page: Page) => page.getByRole("heading", { level: 1 }).first().waitFor();
+const benchReady = (page: Page) => page.locator('[data-testid="bench-results"][data-status="ready"]').waitFor({ timeout: 30_000 });
+const benchPath = () => `/w/${DEMO_WORKSPACE.slug}/designs/${ids.designId}/bench`;
+const resultsTab = (name: string) => async (page: Page) => {
+  await page.getByRole("tab", { name }).click();
+  await page.getByRole("tab", { name, selected: true }).waitFor();
+};
 
 const ids = { designId: "", revisionId: "", reviewId: "", benchLink: "" };
 
@@ -63,16 +71,36 @@ const SIGNED_IN: PageToCheck[] = [
   { name: "designs-table", path: () => `/w/${DEMO_WORKSPACE.slug}`, ready: (page) => page.getByRole("table").first().waitFor() },
   { name: "design", path: () => `/w/${DEMO_WORKSPACE.slug}/designs/${ids.designId}`, ready: heading },
   {
-    name: "bench",
-    path: () => `/w/${DEMO_WORKSPACE.slug}/designs/${ids.designId}/bench`,
-    ready: (page) => page.locator('[data-testid="bench-results"][data-status="ready"]').waitFor({ timeout: 30_000 }),
+    name: "design-request-review",
+    path: () => `/w/${DEMO_WORKSPACE.slug}/designs/${ids.designId}`,
+    ready: heading,
+    act: async (page) => {
+      await page.getByRole("button", { name: "Request review" }).click();
+      await page.getByRole("dialog", { name: "Request review" }).waitFor();
+    },
   },
+  { name: "bench", path: benchPath, ready: benchReady },
+  {
+    name: "bench-part-sheet",
+    path: benchPath,
+    ready: benchReady,
+    act: async (page) => {
+      await page.locator('.react-flow__node [data-testid^="part-"]').first().click();
+      await page.getByTestId("part-sheet").waitFor();
+    },
+  },
+  { name: "bench-destinations-overlays", path: benchPath, ready: benchReady, act: resultsTab("Destinations & overlays") },
+  { name: "bench-measurements", path: benchPath, ready: benchReady, act: resultsTab("Measurements") },
+  { name: "bench-explain", path: benchPath, ready: benchReady, act: resultsTab("Explain") },
+  { name: "bench-calculators", path: benchPath, ready: benchReady, act: resultsTab("Calculators") },
   { name: "review", path: () => `/w/${DEMO_WORKSPACE.slug}/designs/${ids.designId}/reviews/${ids.reviewId}`, ready: heading },
   {
     name: "report",
     path: () => `/w/${DEMO_WORKSPACE.slug}/designs/${ids.designId}/revisions/${ids.revisionId}/report`,
     ready: (page) => page.getByTestId("sign-off-report").waitFor(),
   },
+  { name: "members", path: () => `/w/${DEMO_WORKSPACE.slug}/members`, ready: heading },
+  { name: "settings", path: () => `/w/${DEMO_WORKSPACE.slug}/settings`, ready: heading },
   { name: "account", path: () => "/account", ready: heading },
   { name: "inbox", path: () => "/inbox", ready: heading },
 ];
@@ -108,6 +136,7 @@ afterAll(async () => {
 async function check(entry: PageToCheck) {
   await page.goto(`${baseUrl}${entry.path()}`);
   await entry.ready(page);
+  await entry.act?.(page);
   const findings = await blockingFindings(page);
   if (findings.length > 0) await page.screenshot({ path: screenshotPath(`a11y-${entry.name}`), fullPage: true });
   expect(findings, `${entry.name} (${entry.path()})`).toEqual([]);
