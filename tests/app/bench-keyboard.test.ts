@@ -58,7 +58,8 @@ describe("the bench by keyboard", () => {
   it("tabs to a part, selects it with Enter, types a value in its sheet and sees the figures follow", async () => {
     const before = await page.getByTestId("figure-low").textContent();
     await page.locator("body").focus();
-    await tabToPart(page, "C2");
+    const presses = await tabToPart(page, "C2");
+    console.info(`Tab presses from the top of the bench page to part C2: ${presses}`);
     await page.keyboard.press("Enter");
     await expect.poll(() => page.evaluate(() => document.activeElement?.id)).toBe("sheet-value-capacitance");
     await expect(page.getByTestId("part-sheet").locator("#sheet-id").inputValue()).resolves.toBe("C2");
