@@ -41,7 +41,7 @@ export function ReviewAnchor() {
   if (!text || !shown) return null;
   const missing = part && !parts.some((p) => p.id === part) ? ` — there is no part ${part} in this revision` : "";
   return (
-    <div role="status" data-testid="review-anchor" className="flex items-center gap-2 border-b border-brass/40 bg-brass-light/30 px-4 py-1 text-xs text-brass-deep">
+    <div role="status" data-testid="review-anchor" className="flex items-center gap-2 border-b border-brass/40 bg-brass-light/30 px-4 py-1 text-xs text-ink">
       <span>
         {text}
         {missing}

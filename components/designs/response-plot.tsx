@@ -4,7 +4,8 @@ import type { AcResult } from "@/sim";
 // 520 wide keeps the 13-unit labels readable both at a phone's ~340 px and a desktop column's ~700 px.
 const W = 520;
 const H = 250;
-const PAD = { left: 44, right: 10, top: 14, bottom: 34 };
+// right leaves half a "100k" label beside the last decade line; top keeps the unit clear of the highest tick label
+const PAD = { left: 44, right: 22, top: 26, bottom: 34 };
 const DECADES = [1, 10, 100, 1e3, 1e4, 1e5, 1e6];
 
 const hz = (f: number) => (f >= 1000 ? `${f / 1000}k` : String(f));
@@ -66,7 +67,7 @@ export function ResponsePlot({
         <text x={W - PAD.right} y={H - 2} textAnchor="end" className="fill-ink-soft text-[12px]">
           Hz
         </text>
-        <text x={2} y={PAD.top - 2} className="fill-ink-soft text-[12px]">
+        <text x={2} y={PAD.top - 12} className="fill-ink-soft text-[12px]">
           {unit}
         </text>
       </svg>

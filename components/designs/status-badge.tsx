@@ -2,8 +2,8 @@ import { DESIGN_STATUS_LABELS, type DesignStatus } from "@/components/schemas/de
 
 const TONE: Record<DesignStatus, string> = {
   draft: "border-rule bg-paper-deep text-ink-soft",
-  in_review: "border-brass/50 bg-brass-light/40 text-brass-deep",
-  approved: "border-trace/40 bg-trace-light/40 text-trace",
+  in_review: "border-brass/50 bg-brass-light/40 text-ink",
+  approved: "border-trace/40 bg-trace-light/40 text-ink",
   rework: "border-caution/40 bg-caution-bg text-caution",
 };
 

@@ -22,13 +22,13 @@ export function InboxLink() {
     <Link
       href="/inbox"
       className="flex items-center gap-1.5 whitespace-nowrap rounded px-2 py-1 text-sm text-paper/90 hover:bg-graphite hover:text-brass-light"
-      aria-label={count > 0 ? `Inbox, ${count} unread` : "Inbox"}
       data-testid="inbox-link"
     >
       Inbox
       {count > 0 ? (
         <span data-testid="inbox-count" className="rounded-full bg-brass px-1.5 text-xs font-semibold text-ink">
           {count > 99 ? "99+" : count}
+          <span className="sr-only"> unread</span>
         </span>
       ) : null}
     </Link>

@@ -35,7 +35,7 @@ export function ChecksBadge({ allPass, checks }: { allPass: boolean | null; chec
   if (allPass === null) return <span className="whitespace-nowrap text-xs text-ink-soft">No targets</span>;
   const missed = checks.filter((c) => !c.pass).length;
   return allPass ? (
-    <span data-testid="checks-badge" className="inline-block whitespace-nowrap rounded-full border border-trace/40 bg-trace-light/40 px-2 py-0.5 text-xs font-medium text-trace">
+    <span data-testid="checks-badge" className="inline-block whitespace-nowrap rounded-full border border-trace/40 bg-trace-light/40 px-2 py-0.5 text-xs font-medium text-ink">
       Targets met
     </span>
   ) : (

@@ -39,7 +39,7 @@ export function RemarkThread({ thread, reviewId, benchPath, canRemark }: { threa
             Outdated
           </span>
         ) : null}
-        {resolved ? <span className="rounded-full border border-trace/40 bg-trace-light/40 px-2 py-0.5 font-medium text-trace">Resolved by {thread.resolvedByName ?? "—"}</span> : null}
+        {resolved ? <span className="rounded-full border border-trace/40 bg-trace-light/40 px-2 py-0.5 font-medium text-ink">Resolved by {thread.resolvedByName ?? "—"}</span> : null}
       </div>
       <p className="whitespace-pre-wrap break-words text-sm text-ink">{thread.body}</p>
       {thread.replies.length > 0 ? (

@@ -177,7 +177,8 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
       if (item?.kind === "part") {
         event.preventDefault();
         store.getState().select({ parts: [item.id] });
-        window.dispatchEvent(new CustomEvent(FOCUS_SHEET_EVENT));
+        // after React has drawn the newly selected part's sheet, whose listener takes the focus
+        window.setTimeout(() => window.dispatchEvent(new CustomEvent(FOCUS_SHEET_EVENT)), 0);
       }
       return;
     }

@@ -18,7 +18,7 @@ function GroundNodeView({ selected, data }: NodeProps<GroundFlowNode>) {
         position={Position.Top}
         style={{ left: 20, top: 0, transform: "translate(-50%, -50%)" }}
         className="bench-handle"
-        aria-label="ground"
+        title="Ground pin (net 0)"
       />
     </div>
   );

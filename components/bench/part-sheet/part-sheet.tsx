@@ -21,6 +21,8 @@ import { partToForm, toleranceFromForm } from "./part-form-values";
 
 const inputClass =
   "w-full rounded border border-rule bg-white/80 px-2 py-1 font-mono text-[13px] text-ink outline-none focus:border-brass aria-[invalid=true]:border-caution disabled:bg-paper-deep";
+/** The tolerance box beside a value: fixed and narrow (with w-full as well, it took the row and hid the value). */
+const toleranceClass = inputClass.replace("w-full", "w-16 shrink-0");
 
 function ParsedValue({ part, field, text, parameters }: { part: BenchPart; field: string; text: string; parameters: Record<string, number | string> }) {
   const spec = KIND_SPECS[part.kind].values[field];
@@ -169,7 +171,7 @@ export function PartSheet({ part }: { part: BenchPart }) {
               <div className="flex gap-1">
                 <input
                   id={inputId}
-                  className={inputClass}
+                  className={`${inputClass} min-w-0`}
                   aria-invalid={error ? true : undefined}
                   aria-describedby={error ? `${inputId}-error` : undefined}
                   placeholder={QUANTITIES[valueSpec.quantity].examples.split(",")[0]}
@@ -181,7 +183,7 @@ export function PartSheet({ part }: { part: BenchPart }) {
                   aria-label={`${field} tolerance`}
                   title="Tolerance, such as 5%"
                   placeholder="±%"
-                  className={`${inputClass} w-16 shrink-0`}
+                  className={toleranceClass}
                   aria-invalid={tolError ? true : undefined}
                   autoComplete="off"
                   {...textProps(tolName)}

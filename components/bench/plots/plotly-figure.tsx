@@ -18,7 +18,7 @@ export interface PlotlyFigureProps {
 const CONFIG = { displaylogo: false, responsive: true, modeBarButtonsToRemove: ["select2d", "lasso2d", "toImage"] };
 
 export default function PlotlyFigure({ data, layout, label, className, onDrawn }: PlotlyFigureProps) {
-  const element = useRef<HTMLDivElement>(null);
+  const element = useRef<HTMLElement>(null);
   const drawn = useRef(onDrawn);
   drawn.current = onDrawn;
 
@@ -42,5 +42,6 @@ export default function PlotlyFigure({ data, layout, label, className, onDrawn }
     };
   }, []);
 
-  return <div ref={element} role="img" aria-label={label} className={className} />;
+  // a figure, not an image: Plotly puts focusable controls (the mode bar) inside it
+  return <figure ref={element} aria-label={label} className={className} />;
 }

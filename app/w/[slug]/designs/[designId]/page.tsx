@@ -68,6 +68,11 @@ export default async function DesignPage({ params, searchParams }: Props) {
           <h1 className="min-w-0 break-words text-2xl font-bold text-ink sm:text-3xl">{design.title}</h1>
           <StatusBadge status={design.status} />
         </div>
+        {!deleted ? (
+          <Link href={`/w/${slug}/designs/${designId}/bench`} className="inline-block rounded bg-graphite px-3 py-1.5 text-sm font-semibold text-paper hover:bg-ink">
+            {can(role, "revision.create") ? "Open the bench" : "Open the bench (read-only)"}
+          </Link>
+        ) : null}
         <p className="text-sm text-ink-soft">
           {head ? (
             <>

@@ -107,7 +107,7 @@ export default async function ReviewPage({ params }: Props) {
         </p>
         {review.message ? <p className="max-w-3xl whitespace-pre-wrap break-words text-ink">{review.message}</p> : null}
         {newer ? (
-          <p role="status" className="rounded-md border border-brass/40 bg-brass-light/30 px-3 py-2 text-sm text-brass-deep">
+          <p role="status" className="rounded-md border border-brass/40 bg-brass-light/30 px-3 py-2 text-sm text-ink">
             r{newer.number} was saved after this review was asked for. Remarks on parts that changed since are marked outdated.
           </p>
         ) : null}
