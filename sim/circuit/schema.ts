@@ -390,8 +390,28 @@ export function issueToSimError(issue: z.core.$ZodIssue, input: unknown): SimErr
 
 export type FileValidation = { ok: true; file: CircuitFile } | { ok: false; errors: SimError[] };
 
+/**
+ * Longest lists a file may hold. A microphone front end has tens of parts; the limits are far above any real
+ * design and keep a hostile or broken file from costing seconds (the schema would report every bad entry).
+ */
+export const LIST_LIMITS = { parts: 2000, variants: 200, targets: 200 } as const;
+
+/** The first list in `input` longer than its limit, as the error that says so, before any entry is checked. */
+function tooLongList(input: unknown): SimError | undefined {
+  if (input === null || typeof input !== "object") return undefined;
+  for (const [field, limit] of Object.entries(LIST_LIMITS)) {
+    const list = (input as Record<string, unknown>)[field];
+    if (Array.isArray(list) && list.length > limit) {
+      return new SimError("invalid_file", `${field}: has ${list.length} entries; a file may hold at most ${limit}. Remove some, or split the design.`, { field });
+    }
+  }
+  return undefined;
+}
+
 /** Validates a parsed JSON value against the contract; every problem found, in file order. */
 export function validateCircuitFile(input: unknown): FileValidation {
+  const tooLong = tooLongList(input);
+  if (tooLong) return { ok: false, errors: [tooLong] };
   const result = circuitFileSchema.safeParse(input);
   if (result.success) return { ok: true, file: result.data };
   return { ok: false, errors: result.error.issues.map((issue) => issueToSimError(issue, input)) };
