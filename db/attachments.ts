@@ -4,22 +4,16 @@ import "server-only";
  * download (app/_server/serve-attachment.ts), never inline.
  */
 import { and, desc, eq } from "drizzle-orm";
+import type { AttachmentSummary } from "@/components/schemas/attachment";
 import { recordAudit } from "./audit";
 import { getDb } from "./client";
 import { assertId } from "./designs";
 import { AppError } from "./errors";
 import { attachments, designs, reviews, users } from "./schema";
 
-export interface AttachmentRecord {
-  id: string;
+export interface AttachmentRecord extends AttachmentSummary<Date> {
   designId: string;
-  reviewId: string | null;
   storageKey: string;
-  filename: string;
-  contentType: string;
-  sizeBytes: number;
-  uploadedByName: string | null;
-  createdAt: Date;
 }
 
 export interface NewAttachment {
@@ -30,6 +24,7 @@ export interface NewAttachment {
   filename: string;
   contentType: string;
   sizeBytes: number;
+  caption?: string | null;
   uploadedBy: string;
   /** audit verb: "attachment.upload" or "report.attach" */
   action: string;
@@ -43,6 +38,8 @@ const columns = {
   filename: attachments.filename,
   contentType: attachments.contentType,
   sizeBytes: attachments.sizeBytes,
+  caption: attachments.caption,
+  uploadedById: attachments.uploadedBy,
   uploadedByName: users.name,
   createdAt: attachments.createdAt,
 };
@@ -65,6 +62,7 @@ export async function insertAttachment(input: NewAttachment): Promise<{ id: stri
         filename: input.filename,
         contentType: input.contentType,
         sizeBytes: input.sizeBytes,
+        caption: input.caption ?? null,
         uploadedBy: input.uploadedBy,
       })
       .returning({ id: attachments.id });
@@ -104,4 +102,24 @@ export async function listAttachments(workspaceId: string, designId: string, rev
     .leftJoin(users, eq(users.id, attachments.uploadedBy))
     .where(and(...where))
     .orderBy(desc(attachments.createdAt));
+}
+
+/**
+ * Removes an attachment's row (with an audit entry) and returns its storage key so the caller can delete the object
+ * after the row is gone: a failure in storage then leaves an orphan object, never a row pointing at nothing.
+ */
+export async function deleteAttachment(workspaceId: string, designId: string, attachmentId: string, actorId: string): Promise<AttachmentRecord> {
+  const found = await getAttachment(workspaceId, designId, attachmentId);
+  await getDb().transaction(async (tx) => {
+    await tx.delete(attachments).where(eq(attachments.id, found.id));
+    await recordAudit(tx, {
+      workspaceId,
+      actorId,
+      action: "attachment.delete",
+      targetType: "attachment",
+      targetId: found.id,
+      detail: { designId, reviewId: found.reviewId, filename: found.filename },
+    });
+  });
+  return found;
 }

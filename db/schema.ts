@@ -307,6 +307,8 @@ export const attachments = pgTable("attachments", {
   filename: text("filename").notNull(),
   contentType: text("content_type").notNull(),
   sizeBytes: integer("size_bytes").notNull(),
+  /** what the photo or PDF shows, as the uploader put it (optional) */
+  caption: text("caption"),
   uploadedBy: uuid("uploaded_by").notNull().references(() => users.id),
   createdAt: createdAt(),
 }, (t) => [index("attachments_design").on(t.designId)]);

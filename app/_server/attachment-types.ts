@@ -4,10 +4,10 @@ import "server-only";
  * back: always as a download with a fixed safe type, so nothing uploaded can run as a page on Backplate's origin.
  */
 import { looksBinary } from "@/components/measurements/read-table";
+import { ATTACHMENT_LIMITS_TEXT } from "@/components/schemas/attachment";
 import { AppError } from "@/db/errors";
 
-/** Largest attachment accepted, bytes (a phone photo or a report PDF). */
-export const MAX_ATTACHMENT_BYTES = 20_000_000;
+export { MAX_ATTACHMENT_BYTES } from "@/components/schemas/attachment";
 
 const startsWith = (bytes: Uint8Array, sig: number[], at = 0) => sig.every((b, i) => bytes[at + i] === b);
 
@@ -17,7 +17,7 @@ export function sniffAttachmentType(bytes: Uint8Array, filename: string): string
   if (startsWith(bytes, [0x25, 0x50, 0x44, 0x46, 0x2d])) return "application/pdf";
   if (startsWith(bytes, [0x52, 0x49, 0x46, 0x46]) && startsWith(bytes, [0x57, 0x45, 0x42, 0x50], 8)) return "image/webp";
   if (/\.(txt|csv|tsv)$/i.test(filename) && !looksBinary(bytes)) return "text/plain; charset=utf-8";
-  throw new AppError("unsupported_media_type", "Attach a photo (PNG, JPEG, WebP), a PDF, or a text file (.txt, .csv, .tsv).");
+  throw new AppError("unsupported_media_type", `That file is not one Backplate keeps. Attach ${ATTACHMENT_LIMITS_TEXT}.`);
 }
 
 /** Headers of every attachment download: a download, never rendered inline, never sniffed into something else. */

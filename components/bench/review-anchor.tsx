@@ -2,16 +2,17 @@
 /**
  * Opens the bench at a remark's anchor: `?part=J1` selects the part (its sheet opens as for a click), `?net=out`
  * selects the parts on that net, `?from=20&to=200` and `?figure=low_corner_hz` name the range or figure in a strip
- * above the canvas, so a reviewer's remark and the bench show the same thing.
+ * above the canvas (the range also zooms the magnitude plot, components/bench/anchor-range.ts), so a reviewer's
+ * remark and the bench show the same thing.
  */
 import { useSearchParams } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
+import { anchorRange } from "./anchor-range";
 import { useBench, useBenchStore } from "./store/bench-store-context";
 
 function describe(params: URLSearchParams): string | null {
-  const from = Number(params.get("from"));
-  const to = Number(params.get("to"));
-  if (params.has("from") && params.has("to") && from > 0 && to > from) return `Remark about ${from} Hz – ${to} Hz on the plots`;
+  const range = anchorRange(params);
+  if (range) return `Remark about ${range.fromHz} Hz – ${range.toHz} Hz (the magnitude plot is zoomed to it)`;
   if (params.get("figure")) return `Remark about the figure ${params.get("figure")}`;
   if (params.get("net")) return `Remark about net ${params.get("net")} (its parts are selected)`;
   if (params.get("part")) return `Remark about part ${params.get("part")}`;

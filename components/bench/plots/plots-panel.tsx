@@ -6,12 +6,13 @@
  */
 import { useMemo, useRef, useState } from "react";
 import type { NoiseResult } from "@/sim/results";
+import { useAnchorRange } from "../anchor-range";
 import { notePlotted } from "../solver/update-timing";
 import { loadPlotly } from "./load-plotly";
 import PlotlyFigure from "./plotly-figure";
 import { type CsvSeries, downloadText, resultsCsv } from "./results-csv";
 import {
-  BODE_LAYOUT,
+  bodeLayoutFor,
   bodeTraces,
   type Envelope,
   IMPEDANCE_LAYOUT,
@@ -50,6 +51,8 @@ export default function PlotsPanel({ curves, envelope, noise, impedance, generat
   const [tab, setTab] = useState<PlotName>("bode");
   const elements = useRef<Partial<Record<PlotName, HTMLElement>>>({});
   const bode = useMemo(() => bodeTraces(curves, envelope), [curves, envelope]);
+  const anchor = useAnchorRange();
+  const bodeLayout = useMemo(() => bodeLayoutFor(anchor), [anchor]);
   const noiseData = useMemo(() => (noise ? noiseTraces(noise) : []), [noise]);
   const zout = useMemo(
     () => (impedance ? impedanceTraces(impedance.frequency, impedance.magnitude_ohm) : []),
@@ -119,7 +122,7 @@ export default function PlotsPanel({ curves, envelope, noise, impedance, generat
         <div data-testid="plot-bode">
           <PlotlyFigure
             data={bode}
-            layout={BODE_LAYOUT}
+            layout={bodeLayout}
             label="Magnitude and phase against frequency"
             className="h-[380px] w-full"
             onDrawn={(el) => {

@@ -57,6 +57,24 @@ export const BODE_LAYOUT = {
   yaxis2: { title: { text: "Phase (°)" }, domain: [0, 0.3], gridcolor: PLOT_COLOURS.rule, zeroline: false, dtick: 90 },
 };
 
+/**
+ * The Bode layout with the frequency axis zoomed to a band (a remark's anchor). Plotly takes a log axis's range as
+ * log10 of the limits. The zoom is the start only: `uirevision` keeps the person's own zoom until the band changes.
+ */
+export function bodeLayoutFor(range: { fromHz: number; toHz: number } | null): BodeLayout {
+  if (!range) return BODE_LAYOUT;
+  return {
+    ...BODE_LAYOUT,
+    uirevision: `band ${range.fromHz}–${range.toHz}`,
+    xaxis: { ...BODE_LAYOUT.xaxis, range: [Math.log10(range.fromHz), Math.log10(range.toHz)], autorange: false },
+  };
+}
+
+type BodeLayout = Omit<typeof BODE_LAYOUT, "xaxis" | "uirevision"> & {
+  uirevision: string;
+  xaxis: (typeof BODE_LAYOUT)["xaxis"] & { range?: number[]; autorange?: boolean };
+};
+
 export const NOISE_LAYOUT = {
   ...baseLayout,
   xaxis: logFrequencyAxis,

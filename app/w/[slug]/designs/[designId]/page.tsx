@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { getSessionUser } from "@/app/_server/session";
+import { AttachmentsPanel } from "@/components/attachments/attachments-panel";
 import { can } from "@/components/auth/roles";
 import { BenchLinksPanel } from "@/components/designs/bench-links-panel";
 import { diffCircuits } from "@/components/designs/circuit-diff";
@@ -135,6 +136,11 @@ export default async function DesignPage({ params, searchParams }: Props) {
           ) : null}
           {head && !deleted ? (
             <DesignReviewPanels slug={slug} membership={membership} designId={designId} head={head} revisions={revisions} variants={variants} />
+          ) : null}
+          {!deleted ? (
+            <Panel title="Attachments">
+              <AttachmentsPanel workspaceId={workspaceId} designId={designId} role={role} userId={user.id} canUpload={can(role, "review.remark")} />
+            </Panel>
           ) : null}
           {selected ? (
             <Panel title={`What changed in r${selected.number}`}>

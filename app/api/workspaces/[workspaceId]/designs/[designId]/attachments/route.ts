@@ -2,6 +2,7 @@ import { MAX_ATTACHMENT_BYTES, sniffAttachmentType } from "@/app/_server/attachm
 import { readUpload } from "@/app/_server/read-upload";
 import { route } from "@/app/_server/respond";
 import { storageKey, storeThenRecord } from "@/app/_server/store-then-record";
+import { attachmentFieldsSchema } from "@/components/schemas/attachment";
 import { assertReviewOfDesign, insertAttachment, listAttachments } from "@/db/attachments";
 import { getDesign } from "@/db/designs";
 import { access, type Params } from "../../_access";
@@ -16,7 +17,7 @@ export const GET = route<Params<"designId">>(async (request, { params }) => {
   return Response.json({ attachments: rows.map(({ storageKey: _key, ...rest }) => rest) });
 });
 
-/** Upload a photo, PDF or text file (≤ 20 MB), optionally to a review of the design (`reviewId`). */
+/** Upload a photo, PDF or text file (≤ 20 MB) with an optional caption, optionally to a review of the design (`reviewId`). */
 export const POST = route<Params<"designId">>(async (request, { params }) => {
   const { workspaceId, designId } = await params;
   const { user } = await access(workspaceId, "review.remark");
@@ -24,11 +25,11 @@ export const POST = route<Params<"designId">>(async (request, { params }) => {
   const upload = await readUpload(request, MAX_ATTACHMENT_BYTES, "attachment");
   const filename = (upload.file.name || "attachment").slice(0, 200);
   const contentType = sniffAttachmentType(upload.bytes, filename);
-  const reviewId = upload.fields.reviewId || null;
+  const { caption, reviewId } = attachmentFieldsSchema.parse(upload.fields);
   if (reviewId) await assertReviewOfDesign(designId, reviewId);
   const key = storageKey(designId, "attachments", filename);
   const row = await storeThenRecord(key, upload.bytes, contentType, () =>
-    insertAttachment({ workspaceId, designId, reviewId, storageKey: key, filename, contentType, sizeBytes: upload.bytes.byteLength, uploadedBy: user.id, action: "attachment.upload" }),
+    insertAttachment({ workspaceId, designId, reviewId, storageKey: key, filename, contentType, sizeBytes: upload.bytes.byteLength, caption, uploadedBy: user.id, action: "attachment.upload" }),
   );
-  return Response.json({ attachment: { id: row.id, filename, contentType } }, { status: 201 });
+  return Response.json({ attachment: { id: row.id, filename, contentType, caption } }, { status: 201 });
 });

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requireWorkspacePage } from "@/app/_server/workspace-page";
+import { AttachmentsPanel } from "@/components/attachments/attachments-panel";
 import { can } from "@/components/auth/roles";
 import { formatTime } from "@/components/designs/format-time";
 import { StatusBadge } from "@/components/designs/status-badge";
@@ -166,6 +167,16 @@ export default async function ReviewPage({ params }: Props) {
               <DecisionForm reviewId={review.id} />
             </Panel>
           ) : null}
+          <Panel title="Attachments">
+            <AttachmentsPanel
+              workspaceId={membership.workspaceId}
+              designId={designId}
+              reviewId={review.id}
+              role={membership.role}
+              userId={user.id}
+              canUpload={canRemark}
+            />
+          </Panel>
           {canRemark ? (
             <Panel title="Add a remark">
               <NewRemarkForm reviewId={review.id} parts={parts} nets={nets} figures={Object.keys(TARGET_FIGURES)} />
