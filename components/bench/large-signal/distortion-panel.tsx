@@ -7,16 +7,12 @@ import dynamic from "next/dynamic";
 import { useMemo, useState } from "react";
 import { maxSplWords } from "./limit-words";
 import { thdPlot, waveformPlot } from "./distortion-plots";
+import { harmonicPercent } from "./harmonic-percent";
 import { JobControls } from "./job-controls";
 import { sweepLevels } from "./drive-defaults";
 import type { LargeSignalJobs } from "./use-large-signal";
 
 const PlotlyFigure = dynamic(() => import("../plots/plotly-figure"), { ssr: false });
-
-/** harmonic level in dB relative to the fundamental → percent of the fundamental */
-export function harmonicPercent(db: number): number {
-  return 100 * 10 ** (db / 20);
-}
 
 export function DistortionPanel({
   jobs,
