@@ -78,4 +78,29 @@ describe("distortion", () => {
     expect(check.distortion![0].thd_percent).toBeLessThan(0.5);
     expect(check.distortion![1].thd_percent).toBeGreaterThan(0.5);
   });
+
+  it("a common-source JFET short of drain headroom is limited by the ohmic (triode) region, not called saturation", () => {
+    // Self-bias by hand (Shockley's equation, reference README): Id = 1 mA·(2 − 470·Id)² gives Id ≈ 1.58 mA,
+    // Vov ≈ 1.26 V; with RD 5.2 kΩ, Vds ≈ 12 − 1.58 mA·5.67 kΩ ≈ 3.0 V, only ≈ 1.7 V above Vov = Vgs − Vp, while
+    // cut-off is ≈ 1.26 V·(1 + gm·RS) ≈ 2.8 V of gate swing away: the drain swing (gain ≈ 6) reaches Vds = Vov
+    // first. In the trade that is the ohmic (triode) region; a JFET's "saturation" is where it normally works.
+    const c = circuit(
+      [
+        part("VPOL", "vsource", { p: "pol", n: "0" }, { dc: 60 }),
+        part("RB", "resistor", { a: "pol", b: "dia" }, { resistance: 1e9 }),
+        part("MIC", "capsule", { diaphragm: "dia", backplate: "0" }, { capacitance: 50e-12, strain_per_pa: 3e-4 }),
+        part("C1", "capacitor", { a: "dia", b: "g" }, { capacitance: 1e-9 }),
+        part("RG", "resistor", { a: "g", b: "0" }, { resistance: 1e9 }),
+        part("VDD", "vsource", { p: "vdd", n: "0" }, { dc: 12 }),
+        part("RD", "resistor", { a: "vdd", b: "d" }, { resistance: 5.2e3 }),
+        part("J1", "jfet", { d: "d", g: "g", s: "s" }, { idss: 4e-3, pinch_off: -2 }),
+        part("RS", "resistor", { a: "s", b: "0" }, { resistance: 470 }),
+      ],
+      { plus: "d" },
+      { distortion: { frequency: 1000, splDb: [94], temperature: T } },
+    );
+    const r = simulate(c);
+    expect(r.figures.max_spl_db).not.toBeNull();
+    expect(r.figures.max_spl_limited_by).toEqual({ part: "J1", reason: "ohmic (triode) region" });
+  });
 });

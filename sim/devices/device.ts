@@ -115,7 +115,11 @@ export interface TransientStampContext extends DcStampContext {
 export interface RegionMargin {
   /** V; negative once the device has left its region */
   margin: number;
-  reason: "cut-off" | "saturation" | "gate conduction" | "grid conduction";
+  /**
+   * The trade's name of the boundary: "saturation" only for a bipolar transistor whose Vce collapses; a JFET
+   * leaving its constant-current region at Vds = Vgs − Vp enters the "ohmic (triode) region".
+   */
+  reason: "cut-off" | "saturation" | "ohmic (triode) region" | "gate conduction" | "grid conduction";
 }
 
 export interface DeviceReport {

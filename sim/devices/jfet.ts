@@ -121,16 +121,16 @@ class Jfet implements Device {
   }
 
   /**
-   * Nearest boundary (n frame): cut-off at Vov = 0, the ohmic region at Vds = Vov (reported as "saturation": the
-   * drain runs out of voltage headroom, as a bipolar transistor saturates), and gate conduction at a forward bias
-   * of JFET_GATE_FORWARD_WARNING_V.
+   * Nearest boundary (n frame): cut-off at Vov = 0, the ohmic (triode) region at Vds = Vov = Vgs − Vp (the drain
+   * runs out of voltage headroom; not "saturation", which for a JFET is the constant-current region it works in),
+   * and gate conduction at a forward bias of JFET_GATE_FORWARD_WARNING_V.
    */
   regionMargin(x: Float64Array): RegionMargin {
     const [vgs, vds] = this.frameVoltages(x);
     const vov = vgs - this.parameters().pinchOff;
     const candidates: RegionMargin[] = [
       { margin: vov, reason: "cut-off" },
-      { margin: Math.abs(vds) - vov, reason: "saturation" },
+      { margin: Math.abs(vds) - vov, reason: "ohmic (triode) region" },
       { margin: JFET_GATE_FORWARD_WARNING_V - Math.max(vgs, vgs - vds), reason: "gate conduction" },
     ];
     return candidates.reduce((a, b) => (b.margin < a.margin ? b : a));

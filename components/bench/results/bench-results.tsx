@@ -15,6 +15,9 @@ import { DestinationPicker } from "../destinations/destination-picker";
 import { DEFAULT_CABLE_LENGTH_M } from "../destinations/presets";
 import type { BenchDocument } from "../document";
 import { ExplainPanel } from "../explain/explain-panel";
+import { LargeSignalPanel } from "../large-signal/large-signal-panel";
+import { maxSplWords } from "../large-signal/limit-words";
+import { useLargeSignal } from "../large-signal/use-large-signal";
 import { type MeasurementOverlay, MeasurementsPanel } from "../measurements/measurements-panel";
 import { OverlayControls, type RevisionSource } from "../overlays/overlay-controls";
 import { type PinnedResult, pinCurve } from "../overlays/pinned";
@@ -35,9 +38,10 @@ const PlotsPanel = dynamic(() => import("../plots/plots-panel"), {
   ),
 });
 
-type Tab = "op" | "overlays" | "measurements" | "explain" | "calculators";
+type Tab = "op" | "large" | "overlays" | "measurements" | "explain" | "calculators";
 const TABS: { name: Tab; label: string }[] = [
   { name: "op", label: "Operating point" },
+  { name: "large", label: "Large signal" },
   { name: "overlays", label: "Destinations & overlays" },
   { name: "measurements", label: "Measurements" },
   { name: "explain", label: "Explain" },
@@ -92,6 +96,9 @@ export function BenchResults({
     overlays,
   });
   const { result, family } = live;
+  const largeSignal = useLargeSignal(document.circuit, variant);
+  const largeResult = largeSignal.distortion.job.result;
+  const maxSpl = largeResult?.ok ? maxSplWords(largeResult.value.figures) : null;
   const doc = result?.document;
   const liveOp = doc?.op ?? null;
   useEffect(() => {
@@ -186,6 +193,14 @@ export function BenchResults({
               hasCapsule={hasCapsule}
               noiseRan={doc.noise !== undefined}
               stale={live.stale}
+              extraRows={[
+                {
+                  key: "max-spl",
+                  label: "Maximum SPL",
+                  value: maxSpl?.value ?? "—",
+                  reason: maxSpl ? (maxSpl.note ?? undefined) : "run the distortion panel (Large signal tab) to find it",
+                },
+              ]}
             />
           ) : (
             <p className="text-sm text-ink-soft">
@@ -249,6 +264,7 @@ export function BenchResults({
             ) : (
               <p className="text-sm text-ink-soft">No operating point yet.</p>
             ))}
+          {tab === "large" && <LargeSignalPanel jobs={largeSignal} circuit={document.circuit} variant={variant} />}
           {tab === "overlays" && (
             <div className="grid grid-cols-1 gap-6 md:grid-cols-2">
               <DestinationPicker value={destinations} onChange={setDestinations} />

@@ -76,13 +76,16 @@ export function FiguresPanel({
   hasCapsule,
   noiseRan,
   stale,
+  extraRows = [],
 }: {
   figures: Figures;
   hasCapsule: boolean;
   noiseRan: boolean;
   stale?: boolean;
+  /** figures from runs apart from the live solve (max SPL from the distortion panel) */
+  extraRows?: FigureRow[];
 }) {
-  const rows = figureRows(figures, hasCapsule, noiseRan);
+  const rows = [...figureRows(figures, hasCapsule, noiseRan), ...extraRows];
   return (
     <section
       aria-label="Figures"

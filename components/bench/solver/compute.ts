@@ -51,6 +51,9 @@ function forBench(circuit: unknown): unknown {
   // the sweep is an overlay here, run by the family job
   delete analyses.sweep;
   delete analyses.spread;
+  // the large-signal runs take seconds: the bench runs them as long jobs when asked (large-signal/)
+  delete analyses.transient;
+  delete analyses.distortion;
   return { ...file, analyses };
 }
 
