@@ -6,7 +6,7 @@
  */
 import { useMemo, useRef, useState } from "react";
 import type { NoiseResult } from "@/sim/results";
-import { notePlotted } from "../solver/update-timing";
+import { notePlotted, noteStage } from "../solver/update-timing";
 import { loadPlotly } from "./load-plotly";
 import PlotlyFigure from "./plotly-figure";
 import { type CsvSeries, downloadText, resultsCsv } from "./results-csv";
@@ -57,6 +57,9 @@ export default function PlotsPanel({ curves, envelope, noise, impedance, generat
   );
   const generationRef = useRef(generation);
   generationRef.current = generation;
+  // a lone curve needs no legend (and Plotly then skips laying one out on every update)
+  const single = bode.length <= 2;
+  const bodeLayout = useMemo(() => (single ? { ...BODE_LAYOUT, showlegend: false } : BODE_LAYOUT), [single]);
 
   const exportPng = async () => {
     const element = elements.current[tab];
@@ -119,9 +122,10 @@ export default function PlotsPanel({ curves, envelope, noise, impedance, generat
         <div data-testid="plot-bode">
           <PlotlyFigure
             data={bode}
-            layout={BODE_LAYOUT}
+            layout={bodeLayout}
             label="Magnitude and phase against frequency"
             className="h-[380px] w-full"
+            onDraw={() => noteStage(generationRef.current, "rendered")}
             onDrawn={(el) => {
               elements.current.bode = el;
               notePlotted(generationRef.current);
