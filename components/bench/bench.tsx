@@ -6,7 +6,7 @@
  * stay (read-only use).
  */
 import { ReactFlowProvider } from "@xyflow/react";
-import { Suspense, useCallback, useMemo, useState } from "react";
+import { memo, Suspense, useCallback, useMemo, useState } from "react";
 import { designsFetch, designUrl } from "@/components/designs/designs-api";
 import { BenchTopBar } from "./bench-top-bar";
 import { BenchCanvas } from "./canvas/bench-canvas";
@@ -24,6 +24,12 @@ import { BenchStoreProvider, useBench, useBenchStore } from "./store/bench-store
 import { canvasProblem } from "./store/canvas-problem";
 import { structureProblem } from "./store/structure-check";
 import { Tray } from "./tray/tray";
+
+// Each reads the store itself; memo keeps a new live result (which re-renders the body for the caution banner and
+// the canvas's problem) from re-rendering the canvas, the tray and the part sheet when their props are unchanged.
+const Canvas = memo(BenchCanvas);
+const TrayPanel = memo(Tray);
+const Sheet = memo(SheetPanel);
 
 export interface BenchProps {
   circuit: unknown;
@@ -182,10 +188,10 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
       )}
       <div className="grid h-[62vh] min-h-[420px] grid-cols-1 border-b border-rule md:h-[calc(100vh-11rem)] md:max-h-[760px] md:grid-cols-[176px_minmax(0,1fr)_288px] md:grid-rows-[minmax(0,1fr)]">
         <aside className="hidden min-h-0 overflow-y-auto border-r border-rule bg-paper-deep/40 md:block" aria-label="Tray panel">
-          {!readOnly ? <Tray /> : <p className="p-3 text-xs text-ink-soft">Read-only: the tray is for designers.</p>}
+          {!readOnly ? <TrayPanel /> : <p className="p-3 text-xs text-ink-soft">Read-only: the tray is for designers.</p>}
         </aside>
         <div className="relative min-h-0 min-w-0">
-          <BenchCanvas error={problem} />
+          <Canvas error={problem} />
           {!readOnly && document.circuit.parts.length === 0 && <StartFrom />}
           <button
             type="button"
@@ -197,12 +203,12 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
           </button>
           {sheetOpen && (
             <div className="absolute inset-x-2 top-12 bottom-2 z-10 overflow-y-auto rounded border border-rule bg-paper p-3 shadow md:hidden">
-              <SheetPanel />
+              <Sheet />
             </div>
           )}
         </div>
         <aside className="hidden min-h-0 overflow-y-auto border-l border-rule p-3 md:block" aria-label="Part sheet panel">
-          <SheetPanel />
+          <Sheet />
         </aside>
       </div>
       <section className="px-3 py-4 sm:px-4" aria-label="Results">

@@ -169,6 +169,7 @@ describe("bench live results in Chromium", () => {
     await page.evaluate(() => {
       window.__benchUpdateDurations = [];
       window.__benchSolveDurations = [];
+      window.__benchUpdateStages = [];
     });
     // each value differs from the one before it, so every change re-solves
     const values = ["3k3", "3k6", "4k7", "5k6", "6k8"];
@@ -178,9 +179,10 @@ describe("bench live results in Chromium", () => {
         .poll(() => page.evaluate(() => window.__benchUpdateDurations?.length ?? 0), { timeout: 10_000 })
         .toBe(i + 1);
     }
-    const { updates, solves } = await page.evaluate(() => ({
+    const { updates, solves, stages } = await page.evaluate(() => ({
       updates: window.__benchUpdateDurations ?? [],
       solves: window.__benchSolveDurations ?? [],
+      stages: window.__benchUpdateStages ?? [],
     }));
     const median = (values: number[]) => {
       const sorted = [...values].sort((x, y) => x - y);
@@ -200,6 +202,8 @@ describe("bench live results in Chromium", () => {
           median_ms: median(updates),
           solver_median_ms: median(solves.slice(-CHANGES_MEASURED)),
           updates_ms: updates,
+          // where each update's time went (components/bench/solver/update-timing.ts); `npm run bench:ui` summarises
+          stages_ms: stages,
         },
         null,
         2,

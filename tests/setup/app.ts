@@ -1,13 +1,12 @@
 /**
  * Global setup of the browser project: throwaway services, the demo seed, a production build (into .next-test,
- * only when the sources changed) and `next start` on a free port. Tests read the address with
- * `inject("baseUrl")` and drive Debian's Chromium through playwright-core (tests/app/chromium.ts).
+ * only when the sources changed) and `next start` on a free port (scripts/lib/built-app.ts). Tests read the address
+ * with `inject("baseUrl")` and drive Debian's Chromium through playwright-core (tests/app/chromium.ts).
  */
 import type { TestProject } from "vitest/node";
-import { seedDemo } from "../../db/seed";
-import { buildIfStale } from "../../scripts/lib/build";
-import { type AppServer, startAppServer } from "../../scripts/lib/app-server";
-import { startTestServices } from "../../scripts/lib/services";
+import { startBuiltApp, TEST_SECRET } from "../../scripts/lib/built-app";
+
+export { TEST_SECRET };
 
 declare module "vitest" {
   export interface ProvidedContext {
@@ -23,28 +22,14 @@ declare module "vitest" {
 
 /** Build folder of the app tests; several checkouts or runs at once can each set their own. */
 export const TEST_DIST_DIR = process.env.BACKPLATE_TEST_DIST_DIR || ".next-test";
-/** Session-cookie key of the test servers (throwaway, like their data). */
-export const TEST_SECRET = "browser-test-secret-not-for-production";
 
 export default async function setup(project: TestProject) {
-  const services = await startTestServices();
-  await seedDemo(services.databaseUrl);
-  buildIfStale(TEST_DIST_DIR, (line) => console.log(`[browser setup] ${line}`));
-  let server: AppServer;
-  try {
-    server = await startAppServer({ distDir: TEST_DIST_DIR, env: services.env, secret: TEST_SECRET });
-  } catch (error) {
-    await services.stop();
-    throw error;
-  }
-  const { baseUrl } = server;
-  project.provide("baseUrl", baseUrl);
+  const app = await startBuiltApp(TEST_DIST_DIR, (line) => console.log(`[browser setup] ${line}`));
+  const { services } = app;
+  project.provide("baseUrl", app.baseUrl);
   project.provide("databaseUrl", services.databaseUrl);
   project.provide("pgDataDir", services.pgDataDir);
   project.provide("pgPort", services.pgPort);
   project.provide("s3Env", services.s3?.env ?? {});
-  return async () => {
-    await server.stop();
-    await services.stop();
-  };
+  return () => app.stop();
 }

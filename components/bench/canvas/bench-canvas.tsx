@@ -35,7 +35,9 @@ import { PartNode } from "./part-node";
 import { commandOfKey } from "./shortcuts";
 
 const NODE_TYPES = { part: PartNode, ground: GroundNode, netLabel: LabelNode };
-const FIT_OPTIONS = { padding: 0.2, maxZoom: 1.4 };
+// minZoom: a fitted drawing never shrinks its 10 px value labels below 9 px on screen (a large circuit is then
+// fitted as far as it stays readable, and panned for the rest)
+const FIT_OPTIONS = { padding: 0.2, maxZoom: 1.4, minZoom: 0.9 };
 /** The canvas is fitted again when its width changes by more than this share (a phone turned, a window snapped). */
 const REFIT_WIDTH_CHANGE = 0.25;
 

@@ -13,8 +13,17 @@ export interface PlotlyModule {
 }
 
 let loading: Promise<PlotlyModule> | null = null;
+let loaded: PlotlyModule | null = null;
 
 export function loadPlotly(): Promise<PlotlyModule> {
-  loading ??= import("plotly.js-dist-min").then((m) => (m.default ?? m) as PlotlyModule);
+  loading ??= import("plotly.js-dist-min").then((m) => {
+    loaded = (m.default ?? m) as PlotlyModule;
+    return loaded;
+  });
   return loading;
+}
+
+/** Plotly when it has loaded (so an update can draw in the same task as React's commit), else null. */
+export function plotlyIfLoaded(): PlotlyModule | null {
+  return loaded;
 }

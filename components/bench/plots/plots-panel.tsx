@@ -7,7 +7,7 @@
 import { useMemo, useRef, useState } from "react";
 import type { NoiseResult } from "@/sim/results";
 import { useAnchorRange } from "../anchor-range";
-import { notePlotted } from "../solver/update-timing";
+import { notePlotted, noteStage } from "../solver/update-timing";
 import { loadPlotly } from "./load-plotly";
 import PlotlyFigure from "./plotly-figure";
 import { type CsvSeries, downloadText, resultsCsv } from "./results-csv";
@@ -52,7 +52,6 @@ export default function PlotsPanel({ curves, envelope, noise, impedance, generat
   const elements = useRef<Partial<Record<PlotName, HTMLElement>>>({});
   const bode = useMemo(() => bodeTraces(curves, envelope), [curves, envelope]);
   const anchor = useAnchorRange();
-  const bodeLayout = useMemo(() => bodeLayoutFor(anchor), [anchor]);
   const noiseData = useMemo(() => (noise ? noiseTraces(noise) : []), [noise]);
   const zout = useMemo(
     () => (impedance ? impedanceTraces(impedance.frequency, impedance.magnitude_ohm) : []),
@@ -60,6 +59,12 @@ export default function PlotsPanel({ curves, envelope, noise, impedance, generat
   );
   const generationRef = useRef(generation);
   generationRef.current = generation;
+  // a lone curve needs no legend (and Plotly then skips laying one out on every update)
+  const single = bode.length <= 2;
+  const bodeLayout = useMemo(() => {
+    const layout = bodeLayoutFor(anchor);
+    return single ? { ...layout, showlegend: false } : layout;
+  }, [anchor, single]);
 
   const exportPng = async () => {
     const element = elements.current[tab];
@@ -125,6 +130,7 @@ export default function PlotsPanel({ curves, envelope, noise, impedance, generat
             layout={bodeLayout}
             label="Magnitude and phase against frequency"
             className="h-[380px] w-full"
+            onDraw={() => noteStage(generationRef.current, "rendered")}
             onDrawn={(el) => {
               elements.current.bode = el;
               notePlotted(generationRef.current);

@@ -6,7 +6,7 @@
  * explanation; `onApplyValues` writes a calculator's result into a part (absent or readOnly: no writing).
  */
 import dynamic from "next/dynamic";
-import { useEffect, useMemo, useState } from "react";
+import { useCallback, useEffect, useMemo, useState } from "react";
 import type { OpResult } from "@/sim/results";
 import { CalculatorsPanel } from "../calculators/calculators-panel";
 import type { ApplyValues } from "../calculators/capsule-calculator";
@@ -24,7 +24,8 @@ import { type PinnedResult, pinCurve } from "../overlays/pinned";
 import { OVERLAY_COLOURS, PLOT_COLOURS } from "../plots/palette";
 import type { PlotCurve } from "../plots/traces";
 import type { BenchSolveError } from "../solver/protocol";
-import { type OverlayChoice, useLiveSolve } from "../solver/use-live-solve";
+import { type CircuitChanges, type OverlayChoice, useLiveSolve } from "../solver/use-live-solve";
+import { useBenchStore } from "../store/bench-store-context";
 import { type CurveRow, CurvesTable } from "./curves-table";
 import { FiguresPanel } from "./figures-panel";
 import { OperatingPointPanel } from "./operating-point-panel";
@@ -89,7 +90,18 @@ export function BenchResults({
   const [overlays, setOverlays] = useState<OverlayChoice>(NO_OVERLAYS);
   const [pinned, setPinned] = useState<PinnedResult | null>(null);
   const [measured, setMeasured] = useState<MeasurementOverlay | null>(null);
+  const store = useBenchStore();
+  // the solver hears of a change when the store takes it, before React renders it
+  const changes = useCallback<CircuitChanges>(
+    (listener) =>
+      store.subscribe((next, previous) => {
+        if (next.document.circuit !== previous.document.circuit || next.variant !== previous.variant)
+          listener(next.document.circuit, next.variant ?? undefined);
+      }),
+    [store],
+  );
   const live = useLiveSolve(document, {
+    changes,
     variant,
     destinations: destinations.destinations,
     cableLengthM: destinations.cableLengthM,

@@ -58,7 +58,11 @@ function forBench(circuit: unknown): unknown {
 }
 
 export function solveLive(request: LiveRequest): Outcome<LiveResult> {
-  return attempt(() => ({ document: runCircuit(forBench(request.circuit), { variant: request.variant }) }));
+  const started = performance.now();
+  return attempt(() => {
+    const document = runCircuit(forBench(request.circuit), { variant: request.variant });
+    return { document, solveMs: performance.now() - started };
+  });
 }
 
 export function solveImpedance(request: LiveRequest, frequencies: number[]): Outcome<ImpedanceResult> {

@@ -19,6 +19,8 @@ export interface LiveRequest {
 
 export interface LiveResult {
   document: OutputDocument;
+  /** how long the engine took inside the worker (ms), for the update timing */
+  solveMs: number;
 }
 
 /** |Zout(f)| on the live result's AC grid: asked for after the live result, so it never delays the Bode plot. */

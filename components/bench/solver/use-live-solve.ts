@@ -3,10 +3,12 @@
  * `useLiveSolve(document, { variant, destinations, cableLengthM, overlays })`: every change of the circuit is
  * solved on the live worker within a frame; a solve that a newer change overtook is dropped (generation counter)
  * and only the newest pending change is sent next, so a burst of typing costs at most one solve behind. While a
- * solve runs, the previous result stays on screen marked `stale`. The overlay family (destinations, variants, a
- * sweep, other revisions, the spread) runs as a long job on a second worker, with progress and cancel.
+ * solve runs, the previous result stays on screen marked `stale`. With `changes` (a store subscription) a change is
+ * posted the moment the store takes it, so the worker solves while the page renders the edit. The overlay family
+ * (destinations, variants, a sweep, other revisions, the spread) runs as a long job on a second worker, with
+ * progress and cancel.
  */
-import { useEffect, useMemo, useRef, useState } from "react";
+import { useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
 import type { BenchDocument } from "../document";
 import type { Destination } from "../destinations/presets";
 import { type SolverHandle, startSolver } from "./client";
@@ -18,7 +20,7 @@ import type {
   LiveResult,
   RevisionOverlay,
 } from "./protocol";
-import { noteChange, noteSolved } from "./update-timing";
+import { noteChange, noteSolved, noteStage } from "./update-timing";
 import { type LongJobState, useLongJob } from "./use-long-job";
 
 export interface OverlayChoice {
@@ -28,8 +30,13 @@ export interface OverlayChoice {
   spread?: { runs: number; seed: number };
 }
 
+/** Subscribes to changes of the circuit (and variant) as the store takes them, before React renders them. */
+export type CircuitChanges = (listener: (circuit: unknown, variant: string | undefined) => void) => () => void;
+
 export interface LiveSolveOptions {
   variant?: string;
+  /** when given, a change is posted to the worker from here at once instead of after React has rendered it */
+  changes?: CircuitChanges;
   destinations?: Destination[];
   cableLengthM?: number;
   overlays?: OverlayChoice;
@@ -55,12 +62,13 @@ const runFamily = (api: SolverHandle["api"], request: FamilyRequest, onProgress:
   api.family(request, onProgress);
 
 export function useLiveSolve(document: BenchDocument | null, options: LiveSolveOptions = {}): LiveSolveState {
-  const { variant, destinations = [], cableLengthM = 0, overlays } = options;
+  const { variant, destinations = [], cableLengthM = 0, overlays, changes } = options;
   const circuit = document?.circuit ?? null;
   const solver = useRef<SolverHandle | null>(null);
   const generation = useRef(0);
   const inFlight = useRef(false);
   const pending = useRef<{ generation: number; circuit: unknown; variant?: string } | null>(null);
+  const submitted = useRef<{ circuit: unknown; variant?: string } | null>(null);
   const [state, setState] = useState<Omit<LiveSolveState, "family">>({
     status: "idle",
     result: null,
@@ -70,7 +78,8 @@ export function useLiveSolve(document: BenchDocument | null, options: LiveSolveO
     stale: false,
   });
 
-  useEffect(() => {
+  // a layout effect, so the worker exists when the first circuit is submitted (in the layout effect below)
+  useLayoutEffect(() => {
     solver.current = startSolver();
     return () => {
       solver.current?.terminate();
@@ -78,27 +87,31 @@ export function useLiveSolve(document: BenchDocument | null, options: LiveSolveO
     };
   }, []);
 
-  useEffect(() => {
-    if (circuit === null) return;
+  // Takes one state of the circuit to the solver (once: the store's subscription and the layout effect below may
+  // both offer the same circuit). Uses only refs and setState, so it is the same function for the hook's life.
+  const submit = useRef((next: unknown, nextVariant: string | undefined) => {
+    if (submitted.current && submitted.current.circuit === next && submitted.current.variant === nextVariant) return;
+    submitted.current = { circuit: next, variant: nextVariant };
     const mine = ++generation.current;
     noteChange(mine);
-    pending.current = { generation: mine, circuit, variant };
+    pending.current = { generation: mine, circuit: next, variant: nextVariant };
     setState((s) => ({ ...s, status: "solving", stale: s.result !== null }));
     const send = () => {
-      const next = pending.current;
+      const job = pending.current;
       const handle = solver.current;
-      if (!next || !handle || inFlight.current) return;
+      if (!job || !handle || inFlight.current) return;
       pending.current = null;
       inFlight.current = true;
-      handle.api.live({ circuit: next.circuit, variant: next.variant }).then((outcome) => {
+      noteStage(job.generation, "sent");
+      handle.api.live({ circuit: job.circuit, variant: job.variant }).then((outcome) => {
         inFlight.current = false;
-        noteSolved(next.generation);
-        const newest = next.generation === generation.current;
+        noteSolved(job.generation, outcome.ok ? outcome.value.solveMs : undefined);
+        const newest = job.generation === generation.current;
         if (outcome.ok) {
           setState((s) => ({
             status: newest ? "ready" : "solving",
             result: outcome.value,
-            resultGeneration: next.generation,
+            resultGeneration: job.generation,
             error: null,
             impedance: s.impedance,
             stale: !newest,
@@ -106,8 +119,8 @@ export function useLiveSolve(document: BenchDocument | null, options: LiveSolveO
           const frequencies = outcome.value.document.ac?.frequency ?? [];
           if (newest) {
             // |Zout(f)| after the live result, so the figures and the Bode plot never wait for it
-            handle.api.impedance({ circuit: next.circuit, variant: next.variant }, frequencies).then((z) => {
-              if (z.ok && next.generation === generation.current) setState((s) => ({ ...s, impedance: z.value }));
+            handle.api.impedance({ circuit: job.circuit, variant: job.variant }, frequencies).then((z) => {
+              if (z.ok && job.generation === generation.current) setState((s) => ({ ...s, impedance: z.value }));
             });
           }
         } else if (newest) {
@@ -119,7 +132,14 @@ export function useLiveSolve(document: BenchDocument | null, options: LiveSolveO
     // sent at once when the worker is free (changes within one task collapse into one solve); a change made while a
     // solve runs waits for it, and only the newest such change is sent
     queueMicrotask(send);
-  }, [circuit, variant]);
+  }).current;
+
+  // the store's changes go to the worker as they happen, so the solve runs while React renders the edit
+  useEffect(() => changes?.((next, nextVariant) => submit(next, nextVariant)), [changes, submit]);
+  // and whatever reaches the hook by its props (the first document, a bench without a store subscription)
+  useLayoutEffect(() => {
+    if (circuit !== null) submit(circuit, variant);
+  }, [circuit, variant, submit]);
 
   const familyRequest = useMemo((): FamilyRequest | null => {
     if (circuit === null) return null;
