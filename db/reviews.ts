@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import type { Role } from "@/components/auth/roles";
-import { canBeAskedToReview } from "@/components/reviews/review-rules";
+import { reviewersOfferedTo } from "@/components/reviews/review-rules";
 import type { CreateReviewInput } from "@/components/schemas/review";
 import { recordAudit } from "./audit";
 import { getDb } from "./client";
@@ -46,15 +46,15 @@ export interface EligibleReviewer {
   role: Role;
 }
 
-/** Members who can be asked to review (components/reviews/review-rules.ts). */
-export async function listEligibleReviewers(workspaceId: string, allowSelfApproval: boolean): Promise<EligibleReviewer[]> {
+/** The members `requesterId` may ask to review (review-rules.ts reviewersOfferedTo: the dialog's list and the server's check). */
+export async function listEligibleReviewers(workspaceId: string, allowSelfApproval: boolean, requesterId: string): Promise<EligibleReviewer[]> {
   const rows = await getDb()
     .select({ id: users.id, name: users.name, email: users.email, role: memberships.role })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(eq(memberships.workspaceId, workspaceId))
     .orderBy(asc(users.name), asc(users.email));
-  return rows.filter((row) => canBeAskedToReview(row.role, { allowSelfApproval }));
+  return reviewersOfferedTo(rows, requesterId, { allowSelfApproval });
 }
 
 /** Everyone a review's events reach: who asked and who was asked. */
@@ -86,7 +86,7 @@ export async function createReview(
   if (dueAt && dueAt.getTime() < Date.now() - 24 * 3600_000) {
     throw new AppError("invalid_input", "The due date is in the past. Choose a day from today on.", { fields: { dueAt: "Choose a day from today on." } });
   }
-  const eligible = new Map((await listEligibleReviewers(home.workspaceId, home.allowSelfApproval)).map((p) => [p.id, p]));
+  const eligible = new Map((await listEligibleReviewers(home.workspaceId, home.allowSelfApproval, actor.id)).map((p) => [p.id, p]));
   const reviewerIds = [...new Set(input.reviewerIds)];
   for (const id of reviewerIds) {
     if (id === actor.id) throw new AppError("invalid_input", "You cannot review your own request. Pick someone else.", { fields: { reviewerIds: "Pick someone other than yourself." } });

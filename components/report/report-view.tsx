@@ -2,6 +2,8 @@
  * The sign-off report as a page: the same model the PDF draws, in the site's paper-and-brass look. Plots and the
  * circuit picture are the same vector geometry as the PDF, drawn as inline SVG.
  */
+import { SymbolPaths } from "@/components/bench/symbols/part-symbol";
+import { SYMBOL_STROKE } from "@/components/bench/symbols/symbol-geometry";
 import type { PlotGeometry } from "./plot-geometry";
 import type { ReportModel } from "./report-model";
 import type { SchematicGeometry } from "./schematic-geometry";
@@ -63,25 +65,39 @@ function Plot({ g, title }: { g: PlotGeometry; title: string }) {
 }
 
 function Schematic({ g }: { g: SchematicGeometry }) {
+  const font = { fontSize: g.fontSize, fontFamily: "Helvetica, Arial, sans-serif" };
   return (
     <svg viewBox={`0 0 ${g.width} ${g.height}`} className="w-full max-w-3xl" role="img" aria-label="Circuit drawn from the bench layout">
-      {g.wires.map((w, i) => (
-        // biome-ignore lint/suspicious/noArrayIndexKey: wires are positional
-        <line key={i} x1={w.x1} y1={w.y1} x2={w.x2} y2={w.y2} stroke="#15181c" strokeWidth={0.9} />
-      ))}
+      <g fill="none" stroke="#15181c" strokeLinecap="round" strokeLinejoin="round">
+        {g.wires.map((w, i) => (
+          // biome-ignore lint/suspicious/noArrayIndexKey: wires are positional
+          <path key={i} d={w.d} strokeWidth={0.9} />
+        ))}
+        {g.grounds.map((gr, i) => (
+          // biome-ignore lint/suspicious/noArrayIndexKey: grounds are positional
+          <g key={`g${i}`} transform={gr.transform} strokeWidth={SYMBOL_STROKE} color="#15181c">
+            <SymbolPaths strokes={gr.strokes} />
+          </g>
+        ))}
+        {g.parts.map((p) => (
+          <g key={p.id} transform={p.transform} strokeWidth={SYMBOL_STROKE} color={p.enabled ? "#15181c" : "#8a8f96"} stroke="currentColor">
+            <SymbolPaths strokes={p.strokes} />
+          </g>
+        ))}
+      </g>
       {g.parts.map((p) => (
-        <g key={p.id}>
-          <rect x={p.x} y={p.y} width={p.width} height={p.height} fill="#f4f0e6" stroke="#15181c" strokeDasharray={p.enabled ? undefined : "3 2"} />
-          <text x={p.x + p.width / 2} y={p.y + p.height / 2 + 3} fontSize={8} fontWeight={600} textAnchor="middle" fill="#15181c">{p.id}</text>
+        <g key={`t${p.id}`} data-part-label={p.id}>
+          <rect x={p.plate.x} y={p.plate.y} width={p.plate.width} height={p.plate.height} fill="#fbf9f3" opacity={0.9} />
+          <text x={p.name.x} y={p.name.y} {...font} fontWeight={700} textAnchor="middle" fill="#15181c">{p.name.text}</text>
+          {p.value ? <text x={p.value.x} y={p.value.y} {...font} textAnchor="middle" fill="#3c434b">{p.value.text}</text> : null}
         </g>
-      ))}
-      {g.grounds.map((gr, i) => (
-        // biome-ignore lint/suspicious/noArrayIndexKey: grounds are positional
-        <path key={`g${i}`} d={`M${gr.x - 7} ${gr.y}h14M${gr.x - 4} ${gr.y + 3}h8M${gr.x - 1.5} ${gr.y + 6}h3`} stroke="#15181c" />
       ))}
       {g.labels.map((l, i) => (
         // biome-ignore lint/suspicious/noArrayIndexKey: labels are positional
-        <text key={`l${i}`} x={l.x + 3} y={l.y - 2} fontSize={7} fill="#b27a24">{l.net}</text>
+        <g key={`l${i}`}>
+          <path d={l.flag} fill="#fbf3e3" stroke="#b27a24" strokeWidth={0.8} />
+          <text x={l.text.x} y={l.text.y} {...font} fill="#7a5316">{l.text.text}</text>
+        </g>
       ))}
     </svg>
   );

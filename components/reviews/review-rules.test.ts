@@ -1,6 +1,6 @@
 /** The review rules of the issue: a viewer cannot decide; a designer cannot approve their own revision unless allowed. */
 import { describe, expect, it } from "vitest";
-import { canBeAskedToReview, decideRefusal } from "./review-rules";
+import { canBeAskedToReview, decideRefusal, reviewersOfferedTo } from "./review-rules";
 
 const base = { isRequestedReviewer: true, isAuthor: false, allowSelfApproval: false };
 
@@ -11,6 +11,19 @@ describe("review rules", () => {
     expect(canBeAskedToReview("designer", { allowSelfApproval: false })).toBe(false);
     expect(canBeAskedToReview("designer", { allowSelfApproval: true })).toBe(true);
     expect(canBeAskedToReview("viewer", { allowSelfApproval: true })).toBe(false);
+  });
+
+  it("offers the requester's colleagues who can review, never the requester nor a viewer", () => {
+    // the issue's rule: nobody reviews their own request; viewers only read
+    const members = [
+      { id: "owner-1", role: "owner" as const },
+      { id: "rev-1", role: "reviewer" as const },
+      { id: "des-1", role: "designer" as const },
+      { id: "view-1", role: "viewer" as const },
+    ];
+    expect(reviewersOfferedTo(members, "owner-1", { allowSelfApproval: false }).map((m) => m.id)).toEqual(["rev-1"]);
+    expect(reviewersOfferedTo(members, "des-1", { allowSelfApproval: true }).map((m) => m.id)).toEqual(["owner-1", "rev-1"]);
+    expect(reviewersOfferedTo(members, "rev-1", { allowSelfApproval: true }).map((m) => m.id)).toEqual(["owner-1", "des-1"]);
   });
 
   it("refuses a viewer either verdict, and lets reviewers and owners decide", () => {

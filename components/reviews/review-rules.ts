@@ -13,6 +13,14 @@ export function canBeAskedToReview(role: Role, rules: WorkspaceRules): boolean {
   return role === "owner" || role === "reviewer" || (role === "designer" && rules.allowSelfApproval);
 }
 
+/**
+ * The people a requester may ask: members whose role can review, less the requester (nobody reviews their own
+ * request). The request dialog offers exactly these and the server accepts only these.
+ */
+export function reviewersOfferedTo<T extends { id: string; role: Role }>(members: T[], requesterId: string, rules: WorkspaceRules): T[] {
+  return members.filter((m) => m.id !== requesterId && canBeAskedToReview(m.role, rules));
+}
+
 export interface DecideContext extends WorkspaceRules {
   role: Role;
   /** the person is one of the review's requested reviewers */

@@ -47,7 +47,7 @@ beforeAll(async () => {
 describe("sign-off report PDF", () => {
   it("is a PDF whose pages pdftoppm turns into images", () => {
     expect(pdf.subarray(0, 5).toString()).toBe("%PDF-");
-    execFileSync("pdftoppm", ["-png", "-r", "70", path.join(OUT, "report.pdf"), path.join(OUT, "page")]);
+    execFileSync("pdftoppm", ["-png", "-r", "110", path.join(OUT, "report.pdf"), path.join(OUT, "page")]);
     const pages = fs.readdirSync(OUT).filter((f) => f.startsWith("page") && f.endsWith(".png"));
     expect(pages.length).toBeGreaterThanOrEqual(2);
   });
@@ -59,5 +59,24 @@ describe("sign-off report PDF", () => {
     }
     expect(text).toContain("Bench sweep");
     expect(text).toMatch(/Larkfield LA-7 front end r2 · generated/);
+  });
+
+  it("numbers every page 'Page N of M' in its footer, beside the design name and revision", () => {
+    const info = execFileSync("pdfinfo", [path.join(OUT, "report.pdf")]).toString();
+    const total = Number(/Pages:\s+(\d+)/.exec(info)?.[1]);
+    expect(total).toBeGreaterThanOrEqual(2);
+    for (let page = 1; page <= total; page++) {
+      const text = execFileSync("pdftotext", ["-f", String(page), "-l", String(page), "-layout", path.join(OUT, "report.pdf"), "-"]).toString();
+      expect(text).toContain(`Page ${page} of ${total}`);
+      expect(text).toContain("Larkfield LA-7 front end r2");
+    }
+  });
+
+  it("labels each drawn part with its id and key value, as the bench does", () => {
+    // the first page holds the circuit picture: every part of the demo circuit is named there
+    const firstPage = execFileSync("pdftotext", ["-f", "1", "-l", "1", path.join(OUT, "report.pdf"), "-"]).toString();
+    for (const part of demoCircuit().parts as { id: string }[]) expect(firstPage).toContain(part.id);
+    // the bias resistor's key value as the bench's formatter writes it, spelt for the PDF's standard fonts
+    expect(firstPage).toMatch(/G ohm/);
   });
 });

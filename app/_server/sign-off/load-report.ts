@@ -24,7 +24,8 @@ import { signOffRecord } from "@/db/sign-off";
 
 /** The plot box in PDF points (A4 width less margins); the page scales the same geometry to its width. */
 export const REPORT_PLOT_BOX = { width: 515, height: 190 };
-const SCHEMATIC_FIT = { width: 515, height: 300 };
+/** Room for the circuit picture: the page width, and what is left of the first page under the heading. */
+const SCHEMATIC_FIT = { width: 515, height: 500 };
 /** Band over which the largest deviation is reported: the audio band (common practice). */
 export const REPORT_BAND = { fromHz: 20, toHz: 20_000 };
 
@@ -126,7 +127,7 @@ export async function loadReport(
     generatedAt: when(new Date()),
     benchUrl: `${options.origin}/w/${slug}/designs/${designId}/bench`,
     reportUrl: `${options.origin}/w/${slug}/designs/${designId}/revisions/${revisionId}/report`,
-    schematic: hasStoredLayout ? schematicGeometry(document.circuit, document.layout, SCHEMATIC_FIT) : null,
+    schematic: hasStoredLayout ? schematicGeometry(document.circuit, document.layout, SCHEMATIC_FIT, document.circuit.parameters) : null,
     parameters,
     parts: document.circuit.parts.map((p) => ({
       id: p.id,

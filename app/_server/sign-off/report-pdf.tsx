@@ -6,7 +6,8 @@ import "server-only";
 import { Document, G, Line, Link, Page, Path, Rect, renderToBuffer, StyleSheet, Svg, Text, View } from "@react-pdf/renderer";
 import type { PlotGeometry } from "@/components/report/plot-geometry";
 import type { ReportModel } from "@/components/report/report-model";
-import type { SchematicGeometry } from "@/components/report/schematic-geometry";
+import { SYMBOL_STROKE } from "@/components/bench/symbols/symbol-geometry";
+import type { PlacedSymbol, SchematicGeometry } from "@/components/report/schematic-geometry";
 
 /** Characters the standard PDF fonts lack, in words or ASCII. */
 const SPELT: Record<string, string> = { "−": "-", "Ω": " ohm", "√": "sqrt ", "→": ">", "∥": "||", "≤": "<=", "≥": ">=", "✓": "ok", "×": "x" };
@@ -29,7 +30,10 @@ const s = StyleSheet.create({
   head: { flexDirection: "row", borderBottomWidth: 1, borderBottomColor: INK, paddingVertical: 2, fontFamily: "Helvetica-Bold" },
   mono: { fontFamily: "Courier", fontSize: 8.5 },
   caution: { borderWidth: 1, borderColor: CAUTION, backgroundColor: "#fbeee4", color: CAUTION, padding: 6, marginTop: 8 },
-  footerLeft: { position: "absolute", bottom: 22, left: 40, color: SOFT, fontSize: 7.5 },
+  // placed from the top (A4 is 842 pt high): a render-prop text placed with `bottom` under the page's lineHeight is
+  // not drawn at all (react-pdf 4.9), so both footer texts sit at the same `top`
+  footerLeft: { position: "absolute", top: 808, left: 40, right: 130, color: SOFT, fontSize: 7.5 },
+  footerRight: { position: "absolute", top: 808, left: 455, width: 100, textAlign: "right", color: SOFT, fontSize: 7.5 },
   small: { color: SOFT, fontSize: 8 },
 });
 
@@ -91,31 +95,54 @@ function PlotSvg({ g, title, legend, note }: { g: PlotGeometry; title: string; l
   );
 }
 
+/** Symbol strokes as react-pdf paths: the same path data the bench and the report page draw. */
+function PdfSymbol({ placed, colour }: { placed: PlacedSymbol; colour: string }) {
+  return (
+    <G transform={placed.transform}>
+      {placed.strokes.map((st) => (
+        <Path
+          key={st.d}
+          d={st.d}
+          stroke={colour}
+          strokeWidth={st.width ?? SYMBOL_STROKE}
+          strokeDasharray={st.dash}
+          strokeLinecap="round"
+          strokeLinejoin="round"
+          fill={st.filled ? colour : "none"}
+        />
+      ))}
+    </G>
+  );
+}
+
 function SchematicSvg({ g }: { g: SchematicGeometry }) {
+  const font = { fontSize: g.fontSize };
   return (
     <Svg width={g.width} height={g.height} viewBox={`0 0 ${g.width} ${g.height}`}>
       {g.wires.map((w, i) => (
         // biome-ignore lint/suspicious/noArrayIndexKey: wires are positional
-        <Line key={i} x1={w.x1} y1={w.y1} x2={w.x2} y2={w.y2} stroke={INK} strokeWidth={0.9} />
-      ))}
-      {g.parts.map((p) => (
-        <G key={p.id}>
-          <Rect x={p.x} y={p.y} width={p.width} height={p.height} fill={p.enabled ? "#f4f0e6" : "#ffffff"} stroke={p.enabled ? INK : SOFT} strokeWidth={0.9} strokeDasharray={p.enabled ? undefined : "3 2"} />
-          <Text x={p.x + p.width / 2} y={p.y + p.height / 2 + (p.height > 28 ? -1 : 2.5)} style={{ fontSize: 7.5, fontFamily: "Helvetica-Bold" }} textAnchor="middle" fill={INK}>{p.id}</Text>
-          {p.height > 28 ? <Text x={p.x + p.width / 2} y={p.y + p.height / 2 + 7} style={{ fontSize: 6 }} textAnchor="middle" fill={SOFT}>{p.kind}</Text> : null}
-        </G>
+        <Path key={i} d={w.d} stroke={INK} strokeWidth={0.9} fill="none" />
       ))}
       {g.grounds.map((gr, i) => (
         // biome-ignore lint/suspicious/noArrayIndexKey: grounds are positional
-        <G key={`g${i}`}>
-          <Line x1={gr.x - 7} x2={gr.x + 7} y1={gr.y} y2={gr.y} stroke={INK} strokeWidth={1} />
-          <Line x1={gr.x - 4} x2={gr.x + 4} y1={gr.y + 3} y2={gr.y + 3} stroke={INK} strokeWidth={1} />
-          <Line x1={gr.x - 1.5} x2={gr.x + 1.5} y1={gr.y + 6} y2={gr.y + 6} stroke={INK} strokeWidth={1} />
+        <PdfSymbol key={`g${i}`} placed={gr} colour={INK} />
+      ))}
+      {g.parts.map((p) => (
+        <PdfSymbol key={p.id} placed={p} colour={p.enabled ? INK : "#8a8f96"} />
+      ))}
+      {g.parts.map((p) => (
+        <G key={`t${p.id}`}>
+          <Rect x={p.plate.x} y={p.plate.y} width={p.plate.width} height={p.plate.height} fill="#fbf9f3" />
+          <Text x={p.name.x} y={p.name.y} style={{ ...font, fontFamily: "Helvetica-Bold" }} textAnchor="middle" fill={INK}>{pdfText(p.name.text)}</Text>
+          {p.value ? <Text x={p.value.x} y={p.value.y} style={font} textAnchor="middle" fill={SOFT}>{pdfText(p.value.text)}</Text> : null}
         </G>
       ))}
       {g.labels.map((l, i) => (
         // biome-ignore lint/suspicious/noArrayIndexKey: labels are positional
-        <Text key={`l${i}`} x={l.x + 3} y={l.y - 2} style={{ fontSize: 6.5 }} fill={BRASS}>{l.net}</Text>
+        <G key={`l${i}`}>
+          <Path d={l.flag} fill="#fbf3e3" stroke={BRASS} strokeWidth={0.8} />
+          <Text x={l.text.x} y={l.text.y} style={font} fill="#7a5316">{pdfText(l.text.text)}</Text>
+        </G>
       ))}
     </Svg>
   );
@@ -194,6 +221,7 @@ export function ReportDocument({ report: r }: { report: ReportModel }) {
           </View>
         ))}
         <Text style={s.footerLeft} fixed>{pdfText(`${r.title} r${r.revisionNumber} · generated ${r.generatedAt}`)}</Text>
+        <Text style={s.footerRight} fixed render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
       </Page>
     </Document>
   );

@@ -13,6 +13,7 @@ const REVIEW_WORDS = { open: "Open", approved: "Approved", rework: "Rework", wit
 export async function DesignReviewPanels({
   slug,
   membership,
+  userId,
   designId,
   head,
   revisions,
@@ -20,6 +21,8 @@ export async function DesignReviewPanels({
 }: {
   slug: string;
   membership: WorkspaceMembership;
+  /** the signed-in person: the request dialog does not offer them as a reviewer */
+  userId: string;
   designId: string;
   head: { id: string; number: number; circuit: Record<string, unknown> };
   revisions: { id: string; number: number }[];
@@ -28,7 +31,7 @@ export async function DesignReviewPanels({
   const [checks, reviews, reviewers] = await Promise.all([
     getRevisionChecks(head.id),
     listReviews(designId),
-    can(membership.role, "review.request") ? listEligibleReviewers(membership.workspaceId, membership.allowSelfApproval) : Promise.resolve([]),
+    can(membership.role, "review.request") ? listEligibleReviewers(membership.workspaceId, membership.allowSelfApproval, userId) : Promise.resolve([]),
   ]);
   return (
     <>
@@ -51,7 +54,7 @@ export async function DesignReviewPanels({
         <div className="flex items-center justify-between gap-2">
           <h2 className="font-display text-base font-semibold">Reviews</h2>
           {can(membership.role, "review.request") ? (
-            <RequestReviewDialog designId={designId} revisions={revisions} reviewers={reviewers.filter((r) => r.id !== undefined)} />
+            <RequestReviewDialog designId={designId} revisions={revisions} reviewers={reviewers} />
           ) : null}
         </div>
         {reviews.length === 0 ? <p className="text-sm text-ink-soft">No review asked for yet.</p> : null}

@@ -135,7 +135,7 @@ export default async function DesignPage({ params, searchParams }: Props) {
             </Panel>
           ) : null}
           {head && !deleted ? (
-            <DesignReviewPanels slug={slug} membership={membership} designId={designId} head={head} revisions={revisions} variants={variants} />
+            <DesignReviewPanels slug={slug} membership={membership} userId={user.id} designId={designId} head={head} revisions={revisions} variants={variants} />
           ) : null}
           {!deleted ? (
             <Panel title="Attachments">
