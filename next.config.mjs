@@ -1,3 +1,11 @@
+/** Headers of every response (pages, API, static files); the page CSP is added per request in proxy.ts. */
+export const securityHeaders = [
+  { key: "X-Content-Type-Options", value: "nosniff" },
+  { key: "Referrer-Policy", value: "strict-origin-when-cross-origin" },
+  { key: "Permissions-Policy", value: "camera=(), microphone=(), geolocation=(), payment=(), usb=(), interest-cohort=()" },
+  { key: "X-Frame-Options", value: "DENY" },
+];
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   reactStrictMode: true,
@@ -6,6 +14,10 @@ const nextConfig = {
   distDir: process.env.BACKPLATE_DIST_DIR || ".next",
   // pg is a Node library with optional native bindings: keep it out of the server bundle.
   serverExternalPackages: ["pg"],
+  // Every response, static files included; the page policy (CSP, with a nonce) is set per request in proxy.ts.
+  async headers() {
+    return [{ source: "/:path*", headers: securityHeaders }];
+  },
 };
 
 export default nextConfig;

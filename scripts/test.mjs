@@ -2,11 +2,13 @@
 /**
  * `npm test`: every check, in order — type check, lint, unit tests, integration tests (own PostgreSQL), app tests
  * (built app in Debian's Chromium). Installs what is missing first. Ends with one line that adds every suite up:
- * `N passed, N failed, N skipped` (the type check and the lint count as one test each).
+ * `N passed, N failed, N skipped` (the type check, the lint and the dependency audit count as one test each; an audit
+ * the registry could not answer counts as skipped).
  */
 import { spawnSync } from "node:child_process";
 import fs from "node:fs";
 import path from "node:path";
+import { AUDIT_SKIPPED_EXIT } from "./audit.mjs";
 import { ensureInstalled } from "./start.mjs";
 
 const root = path.resolve(import.meta.dirname, "..");
@@ -48,13 +50,15 @@ function ensurePoppler() {
 const totals = { passed: 0, failed: 0, skipped: 0 };
 const report = [];
 
-function runCheck(name, command, args) {
+/** `skipExit`: the exit code by which a check says it could not run (counted as skipped, never as passed). */
+function runCheck(name, command, args, skipExit) {
   const started = Date.now();
   console.log(`\n▶ ${name}`);
   const result = spawnSync(command, args, { cwd: root, stdio: "inherit" });
-  const ok = result.status === 0;
-  totals[ok ? "passed" : "failed"] += 1;
-  report.push(`${ok ? "ok  " : "FAIL"} ${name} (${((Date.now() - started) / 1000).toFixed(1)} s)`);
+  const outcome = result.status === 0 ? "passed" : skipExit !== undefined && result.status === skipExit ? "skipped" : "failed";
+  totals[outcome] += 1;
+  const mark = { passed: "ok  ", skipped: "SKIP", failed: "FAIL" }[outcome];
+  report.push(`${mark} ${name} (${((Date.now() - started) / 1000).toFixed(1)} s)`);
 }
 
 function runVitest(project) {
@@ -92,6 +96,7 @@ if (want("app")) ensureChromium();
 if (want("integration")) ensurePoppler();
 if (want("typecheck")) runCheck("type check (tsc)", bin("tsc"), ["--noEmit", "-p", "tsconfig.json"]);
 if (want("lint")) runCheck("lint (biome)", bin("biome"), ["lint", "."]);
+if (want("audit")) runCheck("dependency audit (npm audit --omit=dev, high and critical)", process.execPath, [path.join(root, "scripts", "audit.mjs")], AUDIT_SKIPPED_EXIT);
 for (const project of ["unit", "integration", "app"]) if (want(project)) runVitest(project);
 
 console.log("\nSummary");

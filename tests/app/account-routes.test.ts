@@ -1,13 +1,13 @@
 import { randomUUID } from "node:crypto";
 import { describe, expect, inject, it } from "vitest";
 import { DEMO_PEOPLE } from "../../db/demo-people";
-import { signInWithPassword } from "./http-session";
+import { originHeader, signInWithPassword } from "./http-session";
 import { linkIn, mailTo, NEW_PASSWORD, signUp } from "./people";
 
 const baseUrl = inject("baseUrl");
 
 async function post(path: string, body: unknown, method = "POST") {
-  return fetch(`${baseUrl}${path}`, { method, headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+  return fetch(`${baseUrl}${path}`, { method, headers: { "content-type": "application/json", ...originHeader(baseUrl) }, body: JSON.stringify(body) });
 }
 
 /** Asks next-auth's e-mail provider for a link as a browser would (CSRF token and cookie first). */

@@ -70,6 +70,7 @@ describe("drawing on the bench", () => {
     workspaceId = workspaces.find((w: { slug: string }) => w.slug === "larkfield").workspaceId;
     const created = await api.post(`${baseUrl}/api/workspaces/${workspaceId}/designs`, {
       data: { title: `Drawn follower ${Date.now()}` },
+      headers: { origin: baseUrl }, // as the app's own pages send it (proxy.ts refuses cross-site changes)
     });
     expect(created.status()).toBe(201);
     designId = (await created.json()).design.id;

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { DEMO_WORKSPACE } from "../../db/demo-people";
 import { type DemoRole, demoCircuit, foreignWorkspace, Pool, signInAll, withParameter, workspaceIdOf } from "./design-fixtures";
-import type { HttpSession } from "./http-session";
+import { type HttpSession, originHeader } from "./http-session";
 
 const baseUrl = inject("baseUrl");
 const pool = new Pool({ connectionString: inject("databaseUrl") });
@@ -15,7 +15,7 @@ const anonymous: HttpSession = {
   fetch: (path, init = {}) =>
     fetch(`${baseUrl}${path}`, {
       method: init.method ?? "GET",
-      headers: init.body === undefined ? {} : { "content-type": "application/json" },
+      headers: { ...originHeader(baseUrl), ...(init.body === undefined ? {} : { "content-type": "application/json" }) },
       body: init.body === undefined ? undefined : JSON.stringify(init.body),
       redirect: "manual",
     }),

@@ -7,6 +7,11 @@ export interface HttpSession {
   fetch(path: string, init?: { method?: string; body?: unknown; headers?: Record<string, string> }): Promise<Response>;
 }
 
+/** The Origin a page of the app would send; the API refuses state changes without it (proxy.ts). */
+export function originHeader(baseUrl: string): { origin: string } {
+  return { origin: new URL(baseUrl).origin };
+}
+
 function mergeCookies(jar: Map<string, string>, response: Response) {
   for (const line of response.headers.getSetCookie()) {
     const [pair] = line.split(";");
@@ -29,6 +34,7 @@ export function sessionFromJar(baseUrl: string, jar: Map<string, string>): HttpS
         method: init.method ?? "GET",
         headers: {
           cookie: cookieHeader(jar),
+          ...originHeader(baseUrl),
           ...(init.body === undefined ? {} : { "content-type": "application/json" }),
           ...init.headers,
         },

@@ -13,7 +13,7 @@ import { runCircuit } from "@/sim/run";
 import { testS3 } from "../integration/storage-client";
 import { type Browser, openBrowser, screenshotPath } from "./chromium";
 import { DEMO, Pool } from "./design-fixtures";
-import { type HttpSession, signInWithPassword } from "./http-session";
+import { type HttpSession, originHeader, signInWithPassword } from "./http-session";
 
 const baseUrl = inject("baseUrl");
 const bucket = testS3(inject("s3Env"));
@@ -40,7 +40,7 @@ function upload(file: Blob, name: string, map: object = mapping) {
   const form = new FormData();
   form.set("file", file, name);
   form.set("mapping", JSON.stringify(map));
-  return fetch(`${baseUrl}/api/workspaces/${workspaceId}/designs/${designId}/measurements`, { method: "POST", body: form, headers: { cookie: designer.cookie } });
+  return fetch(`${baseUrl}/api/workspaces/${workspaceId}/designs/${designId}/measurements`, { method: "POST", body: form, headers: { cookie: designer.cookie, ...originHeader(baseUrl) } });
 }
 
 beforeAll(async () => {
@@ -89,7 +89,7 @@ describe("measurement uploads over HTTP", () => {
     const form = new FormData();
     form.set("file", new Blob([csv]), "v.csv");
     form.set("mapping", JSON.stringify(mapping));
-    const refused = await fetch(`${baseUrl}/api/workspaces/${workspaceId}/designs/${designId}/measurements`, { method: "POST", body: form, headers: { cookie: viewer.cookie } });
+    const refused = await fetch(`${baseUrl}/api/workspaces/${workspaceId}/designs/${designId}/measurements`, { method: "POST", body: form, headers: { cookie: viewer.cookie, ...originHeader(baseUrl) } });
     expect(refused.status).toBe(403);
   });
 });

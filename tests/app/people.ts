@@ -1,7 +1,7 @@
 /** New people for app tests, made through the real API (sign-up, then next-auth's password sign-in). */
 import { randomUUID } from "node:crypto";
 import { linkIn } from "../integration/captured-mail-helpers";
-import { type HttpSession, signInWithPassword } from "./http-session";
+import { type HttpSession, originHeader, signInWithPassword } from "./http-session";
 
 export { linkIn };
 
@@ -19,7 +19,7 @@ export async function signUp(baseUrl: string, label: string): Promise<TestPerson
   const name = `${label[0].toUpperCase()}${label.slice(1)} Testperson`;
   const response = await fetch(`${baseUrl}/api/account/sign-up`, {
     method: "POST",
-    headers: { "content-type": "application/json" },
+    headers: { "content-type": "application/json", ...originHeader(baseUrl) },
     body: JSON.stringify({ name, email, password: NEW_PASSWORD }),
   });
   if (response.status !== 201) throw new Error(`sign-up answered ${response.status}: ${await response.text()}`);

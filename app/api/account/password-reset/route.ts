@@ -1,3 +1,4 @@
+import { limitResetCompletion, limitResetRequest } from "@/app/_server/account-limits";
 import { appUrl, sendMail } from "@/app/_server/mail";
 import { passwordResetMail } from "@/app/_server/mail-templates/password-reset";
 import { hashPassword } from "@/app/_server/passwords";
@@ -13,6 +14,7 @@ import { findUserByEmail } from "@/db/users";
  */
 export const POST = route(async (request: Request) => {
   const { email } = await readJson(request, passwordResetRequestSchema);
+  await limitResetRequest(request, email);
   const user = await findUserByEmail(email);
   if (user) {
     const token = await createPasswordReset(user.id);
@@ -26,6 +28,7 @@ export const POST = route(async (request: Request) => {
 
 /** Sets the new password with the token from the mail. */
 export const PUT = route(async (request: Request) => {
+  await limitResetCompletion(request);
   const input = await readJson(request, passwordResetCompleteSchema);
   const { email } = await completePasswordReset(input.token, await hashPassword(input.password));
   // Whoever holds the mailbox proved it: earlier wrong passwords no longer lock the address out.
