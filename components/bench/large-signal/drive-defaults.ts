@@ -11,8 +11,8 @@ export const DEFAULT_DRIVE_FREQUENCY_HZ = 1000;
 export const SWEEP_FROM_DB = 94;
 export const SWEEP_TO_DB = 154;
 export const SWEEP_STEP_DB = 6;
-/** s; a gigaohm bias into tens of picofarads settles in seconds */
-export const DEFAULT_POWER_ON_STOP_S = 12;
+/** s; a gigaohm bias into tens of picofarads settles in seconds (the demo LA-47 in about 17 s: ln(100)·RC) */
+export const DEFAULT_POWER_ON_STOP_S = 30;
 
 export function sweepLevels(from = SWEEP_FROM_DB, to = SWEEP_TO_DB, step = SWEEP_STEP_DB): number[] {
   const levels: number[] = [];
