@@ -85,7 +85,17 @@ const SIGNED_IN: PageToCheck[] = [
     path: benchPath,
     ready: benchReady,
     act: async (page) => {
-      await page.locator('.react-flow__node [data-testid^="part-"]').first().click();
+      // A part the pointer can reach: fitting keeps labels readable, so a large drawing may run past the canvas edge.
+      const reachable = await page.evaluate(() => {
+        for (const node of document.querySelectorAll<HTMLElement>('.react-flow__node [data-testid^="part-"]')) {
+          const box = node.getBoundingClientRect();
+          const hit = document.elementFromPoint(box.x + box.width / 2, box.y + box.height / 2);
+          if (hit && node.contains(hit)) return node.dataset.testid ?? null;
+        }
+        return null;
+      });
+      expect(reachable, "no part of the bench drawing is visible to click").not.toBeNull();
+      await page.getByTestId(reachable!).click();
       await page.getByTestId("part-sheet").waitFor();
     },
   },

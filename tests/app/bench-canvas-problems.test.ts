@@ -3,6 +3,7 @@
  * sound, its equations are singular) has the part at fault marked on the canvas and the fix said in the results;
  * a ~30-part ladder fitted to the view keeps its part value labels readable (at least 9 px on screen).
  */
+import { originHeader } from "./http-session";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { normaliseCircuit } from "@/components/bench/document/circuit";
@@ -56,6 +57,7 @@ async function openNewDesign(page: Page, title: string) {
   const workspaceId = workspaces.find((w: { slug: string }) => w.slug === "larkfield").workspaceId;
   const created = await api.post(`${baseUrl}/api/workspaces/${workspaceId}/designs`, {
     data: { title: `${title} ${Date.now()}` },
+    headers: originHeader(baseUrl),
   });
   expect(created.status()).toBe(201);
   const designId = (await created.json()).design.id;

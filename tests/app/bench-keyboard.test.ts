@@ -2,6 +2,7 @@
  * The bench by keyboard alone: Tab reaches a part on the canvas, Enter selects it and moves into its part sheet,
  * a value typed there and confirmed with Enter changes the drawing and the live figures.
  */
+import { originHeader } from "./http-session";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { EXTERNALLY_POLARISED_JFET } from "@/components/bench/starting-points/circuits";
@@ -43,6 +44,7 @@ describe("the bench by keyboard", () => {
     const workspaceId = workspaces.find((w: { slug: string }) => w.slug === "larkfield").workspaceId;
     const created = await api.post(`${baseUrl}/api/workspaces/${workspaceId}/designs`, {
       data: { title: `Keyboard follower ${Date.now()}`, circuit: EXTERNALLY_POLARISED_JFET },
+      headers: originHeader(baseUrl),
     });
     expect(created.status()).toBe(201);
     const designId = (await created.json()).design.id;

@@ -177,6 +177,8 @@ const ACCESS: Record<string, Partial<Record<Method, Rule>>> = {
   },
   "/api/workspaces/[workspaceId]/designs/[designId]/attachments/[attachmentId]": {
     GET: { viewer: 404, path: (i) => `${d(i)}/attachments/${i.unknown}` },
+    // anyone who reads may delete what they uploaded, so the unknown id answers 404 before the uploader check
+    DELETE: { viewer: 404, path: (i) => `${d(i)}/attachments/${i.unknown}` },
   },
   "/api/designs/[designId]/reviews": {
     GET: { viewer: 200, path: (i) => `/api/designs/${i.design}/reviews` },
