@@ -16,7 +16,9 @@ export function zodFields(error: ZodError): Record<string, string> {
 }
 
 /** Messages of node-postgres when the server cannot be reached or went away mid-query. */
-const UNREACHABLE_MESSAGE = /ECONNREFUSED|ECONNRESET|Connection terminated|connect ETIMEDOUT|timeout exceeded when trying to connect/i;
+// pg's own phrases too: a pooled client whose connection broke mid-query is "not queryable" until replaced.
+const UNREACHABLE_MESSAGE =
+  /ECONNREFUSED|ECONNRESET|EPIPE|Connection terminated|connect ETIMEDOUT|timeout exceeded when trying to connect|not queryable/i;
 /** SQLSTATEs of a server shutting down or starting up (57P01–57P03) and of a broken connection (class 08). */
 const UNREACHABLE_SQLSTATE = /^(57P0[123]|08\d{3})$/;
 
@@ -28,7 +30,9 @@ function databaseUnreachable(error: unknown): boolean {
   for (let e: unknown = error, depth = 0; e && depth < 5; e = (e as { cause?: unknown }).cause, depth += 1) {
     const { message, code } = e as { message?: unknown; code?: unknown };
     if (typeof message === "string" && UNREACHABLE_MESSAGE.test(message)) return true;
-    if (typeof code === "string" && (UNREACHABLE_SQLSTATE.test(code) || code === "ECONNREFUSED" || code === "ECONNRESET")) return true;
+    if (typeof code === "string" && (UNREACHABLE_SQLSTATE.test(code) || /^(ECONNREFUSED|ECONNRESET|EPIPE)$/.test(code))) return true;
+    // Node's connect to a host with several addresses fails with an AggregateError of the attempts.
+    if (e instanceof AggregateError && e.errors.some((inner) => databaseUnreachable(inner))) return true;
   }
   return false;
 }
