@@ -11,6 +11,7 @@
  */
 import type { AcStampContext, NoiseGenerator } from "../devices/device";
 import { ComplexSystem } from "../mna/complex-system";
+import { type OutputPlan, SparseLuComplexLanes, SWEEP_LANES } from "../mna/sparse-lu-complex-lanes";
 import { DISCARDED_HANDLE, PatternBuilder } from "../mna/pattern";
 import { SingularMatrixError } from "../mna/singular";
 import { compileSparseStructure, type SparseStructure } from "../mna/sparse-structure";
@@ -21,6 +22,16 @@ export interface TransposedStructure {
   structure: SparseStructure;
   /** handle of the circuit's own pattern → storage position of the swapped entry in `structure` */
   positionOfHandle: Int32Array;
+  /**
+   * The four-frequency factorisation of the transposed structure with its constant right-hand side e_out already
+   * lane-interleaved, shared by every adjoint system of the circuit. Sharing is safe for the same reason as the AC
+   * sweep's lane workspace: a noise spectrum factors, solves and reads its lanes within one synchronous call.
+   */
+  lanes: SparseLuComplexLanes;
+  laneRhsRe: Float64Array;
+  laneRhsIm: Float64Array;
+  /** the solve plan for the unknowns noise generators attach to, by the generator set that asked for it */
+  plans: Map<string, OutputPlan>;
 }
 
 const transposedCache = new WeakMap<CompiledCircuit, TransposedStructure>();
@@ -46,7 +57,17 @@ export function transposedStructure(compiled: CompiledCircuit): TransposedStruct
   }
   const positionOfHandle = new Int32Array(original.entries.length);
   for (let h = 0; h < original.entries.length; h++) positionOfHandle[h] = structure.positionOfHandle[swappedHandle[h]];
-  const built = { structure, positionOfHandle };
+  const n = original.size;
+  const laneRhsRe = new Float64Array((n + 1) * SWEEP_LANES);
+  const laneRhsIm = new Float64Array((n + 1) * SWEEP_LANES);
+  const plus = compiled.netIndex.get(compiled.circuit.output.plus) ?? -1;
+  const minus = compiled.netIndex.get(compiled.circuit.output.minus) ?? -1;
+  for (let b = 0; b < SWEEP_LANES; b++) {
+    if (plus >= 0) laneRhsRe[plus * SWEEP_LANES + b] += 1;
+    if (minus >= 0) laneRhsRe[minus * SWEEP_LANES + b] -= 1;
+  }
+  const lanes = new SparseLuComplexLanes(structure);
+  const built = { structure, positionOfHandle, lanes, laneRhsRe, laneRhsIm, plans: new Map() };
   transposedCache.set(compiled, built);
   return built;
 }
@@ -64,6 +85,11 @@ export class AdjointNoiseSystem {
   private readonly system: ComplexSystem;
   private readonly rhsRe: Float64Array;
   private readonly rhsIm: Float64Array;
+  private readonly lanes: SparseLuComplexLanes;
+  private readonly laneRhsRe: Float64Array;
+  private readonly laneRhsIm: Float64Array;
+  private readonly plan: OutputPlan;
+  private readonly omegas = new Float64Array(SWEEP_LANES);
 
   constructor(compiled: CompiledCircuit, op: OperatingPoint) {
     this.compiled = compiled;
@@ -95,6 +121,10 @@ export class AdjointNoiseSystem {
     if (minus >= 0) this.rhsRe[minus] -= 1;
     this.yRe = new Float64Array(n);
     this.yIm = new Float64Array(n);
+    this.lanes = transposed.lanes;
+    this.laneRhsRe = transposed.laneRhsRe;
+    this.laneRhsIm = transposed.laneRhsIm;
+    this.plan = generatorPlan(transposed, this.generators);
   }
 
   /** how many frequencies needed the dense fallback */
@@ -113,10 +143,48 @@ export class AdjointNoiseSystem {
     }
   }
 
+  /**
+   * Factor Aᵀ at SWEEP_LANES frequencies at once (`frequencies[start …]`; a short group repeats its last
+   * frequency in the unused lanes) and solve each for e_out, only as far as the generators' unknowns need. Returns
+   * the bit mask of the lanes whose static pivots failed: re-solve those frequencies with `solveAt`.
+   */
+  solveLanes(frequencies: ArrayLike<number>, start: number): number {
+    const used = Math.min(SWEEP_LANES, frequencies.length - start);
+    for (let b = 0; b < SWEEP_LANES; b++) this.omegas[b] = 2 * Math.PI * frequencies[start + Math.min(b, used - 1)];
+    const failed = this.lanes.factorAt(this.system.conductance, this.system.reactance, this.omegas);
+    this.lanes.solvePlanned(this.laneRhsRe, this.laneRhsIm, this.plan);
+    return failed;
+  }
+
+  /** |transfer|² from generator `g` to the output in lane `lane` of the last `solveLanes`. */
+  laneTransferSquared(g: NoiseGenerator, lane: number): number {
+    const lu = this.lanes;
+    const re = (g.plus < 0 ? 0 : lu.solutionRe(g.plus, lane)) - (g.minus < 0 ? 0 : lu.solutionRe(g.minus, lane));
+    const im = (g.plus < 0 ? 0 : lu.solutionIm(g.plus, lane)) - (g.minus < 0 ? 0 : lu.solutionIm(g.minus, lane));
+    return re * re + im * im;
+  }
+
   /** |transfer|² from generator `g` to the output at the last solved frequency (V²/A² or V²/V²). */
   transferSquared(g: NoiseGenerator): number {
     const re = (g.plus < 0 ? 0 : this.yRe[g.plus]) - (g.minus < 0 ? 0 : this.yRe[g.minus]);
     const im = (g.plus < 0 ? 0 : this.yIm[g.plus]) - (g.minus < 0 ? 0 : this.yIm[g.minus]);
     return re * re + im * im;
   }
+}
+
+/** The restricted solve plan for the unknowns `generators` attach to (cached per set of unknowns). */
+function generatorPlan(transposed: TransposedStructure, generators: readonly NoiseGenerator[]): OutputPlan {
+  const unknowns = new Set<number>();
+  for (const g of generators) {
+    if (g.plus >= 0) unknowns.add(g.plus);
+    if (g.minus >= 0) unknowns.add(g.minus);
+  }
+  const sorted = [...unknowns].sort((a, b) => a - b);
+  const key = sorted.join(",");
+  let plan = transposed.plans.get(key);
+  if (!plan) {
+    plan = transposed.lanes.outputPlan(sorted);
+    transposed.plans.set(key, plan);
+  }
+  return plan;
 }

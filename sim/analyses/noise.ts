@@ -9,6 +9,7 @@
  * mechanisms), so powers add.
  */
 import { rmsFromPowerDensity } from "../acoustics/weighted-rms";
+import { SWEEP_LANES } from "../mna/sparse-lu-complex-lanes";
 import type { NoiseResult } from "../results";
 import type { AdjointNoiseSystem } from "./noise-adjoint";
 
@@ -35,17 +36,25 @@ export function noiseSpectrum(system: AdjointNoiseSystem, frequencies: readonly 
     return arr;
   });
   const outputPower = new Float64Array(count);
-  for (let i = 0; i < count; i++) {
-    const f = frequencies[i];
-    system.solveAt(f);
-    let total = 0;
-    for (let k = 0; k < generators.length; k++) {
-      const g = generators[k];
-      const p = system.transferSquared(g) * g.psd(f);
-      target[k][i] += p;
-      total += p;
+  // Four frequencies per factorisation (noise-adjoint.ts solveLanes); a lane whose static pivots failed is solved
+  // again on its own through the dense fallback.
+  for (let start = 0; start < count; start += SWEEP_LANES) {
+    const failed = system.solveLanes(frequencies, start);
+    const used = Math.min(SWEEP_LANES, count - start);
+    for (let b = 0; b < used; b++) {
+      const i = start + b;
+      const f = frequencies[i];
+      const single = (failed & (1 << b)) !== 0;
+      if (single) system.solveAt(f);
+      let total = 0;
+      for (let k = 0; k < generators.length; k++) {
+        const g = generators[k];
+        const p = (single ? system.transferSquared(g) : system.laneTransferSquared(g, b)) * g.psd(f);
+        target[k][i] += p;
+        total += p;
+      }
+      outputPower[i] = total;
     }
-    outputPower[i] = total;
   }
   return { frequency: frequencies.slice(), outputPower, partPower };
 }

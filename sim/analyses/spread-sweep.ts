@@ -88,6 +88,13 @@ export class SpreadSweep {
   private readonly drivenRows: Int32Array;
   private drivenBlock1: Int32Array = new Int32Array(0);
   private terms: FrequencyTerms[] = [];
+  /**
+   * S₀ of each group of SWEEP_LANES neighbouring frequencies (starting at 0, 4, 8 …), already lane-interleaved as
+   * OrderedLuLanes holds it (entry at of lane b at at·SWEEP_LANES + b; a short last group repeats its last
+   * frequency), so a run loads a group's reduced matrices with one copy before adding its own deltas.
+   */
+  private groupS0Re: Float64Array[] = [];
+  private groupS0Im: Float64Array[] = [];
   private termsFor: ArrayLike<number> | null = null;
   private lanes: OrderedLuLanes = new OrderedLuLanes(0);
   private laneB2Re: Float64Array = new Float64Array(0);
@@ -197,16 +204,17 @@ export class SpreadSweep {
     const { lanes, laneB2Re, laneB2Im, laneX2Re, laneX2Im, varyingAt, deltaG, deltaC } = this;
     const { re, im } = lanes;
     const plan = this.terms[start].plan!;
+    const group = start / SWEEP_LANES;
+    re.set(this.groupS0Re[group]);
+    im.set(this.groupS0Im[group]);
     for (let b = 0; b < SWEEP_LANES; b++) {
       const f = start + Math.min(b, used - 1);
       const t = this.terms[f];
-      for (let at = 0; at < k * k; at++) {
-        re[(at << 2) + b] = t.s0Re[at];
-        im[(at << 2) + b] = t.s0Im[at];
-      }
+      const omega = t.omega;
       for (let e = 0; e < varyingAt.length; e++) {
-        re[(varyingAt[e] << 2) + b] += deltaG[e];
-        im[(varyingAt[e] << 2) + b] += t.omega * deltaC[e];
+        const at = (varyingAt[e] << 2) + b;
+        re[at] += deltaG[e];
+        im[at] += omega * deltaC[e];
       }
       this.reducedRightHandSide(drive, t, frequencies[f]);
       for (let i = 0; i < k; i++) {
@@ -551,6 +559,22 @@ export class SpreadSweep {
       t.plan = plan;
     }
     this.terms = terms;
+    this.groupS0Re = [];
+    this.groupS0Im = [];
+    for (let start = 0; start < terms.length; start += SWEEP_LANES) {
+      const used = Math.min(SWEEP_LANES, terms.length - start);
+      const groupRe = new Float64Array(k * k * SWEEP_LANES);
+      const groupIm = new Float64Array(k * k * SWEEP_LANES);
+      for (let b = 0; b < SWEEP_LANES; b++) {
+        const t = terms[start + Math.min(b, used - 1)];
+        for (let at = 0; at < k * k; at++) {
+          groupRe[at * SWEEP_LANES + b] = t.s0Re[at];
+          groupIm[at * SWEEP_LANES + b] = t.s0Im[at];
+        }
+      }
+      this.groupS0Re.push(groupRe);
+      this.groupS0Im.push(groupIm);
+    }
     return null;
   }
 }
