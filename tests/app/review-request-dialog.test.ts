@@ -30,7 +30,7 @@ const reviewCount = async () => (await pool.query("SELECT count(*)::int AS n FRO
 beforeAll(async () => {
   const workspaceId = await workspaceIdOf(pool, DEMO_WORKSPACE.slug);
   const designer = await signInWithPassword(baseUrl, DEMO.designer, DEMO_PASSWORD);
-  if (!designer.ok) throw new Error(designer.error);
+  if (!designer.ok) throw new Error(designer.error ?? "sign-in failed");
   const created = await designer.session.fetch(`/api/workspaces/${workspaceId}/designs`, { method: "POST", body: { title: TITLE, circuit: demoCircuit() } });
   expect(created.status).toBe(201);
   designId = (await created.json()).design.id;
