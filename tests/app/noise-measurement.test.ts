@@ -6,11 +6,11 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import type { Page } from "playwright-core";
-import { DEMO_PASSWORD, DEMO_WORKSPACE } from "../../db/demo-people";
+import { DEMO_WORKSPACE } from "../../db/demo-people";
 import { runCircuit } from "@/sim/run";
 import { type Browser, openBrowser, screenshotPath } from "./chromium";
-import { DEMO, demoCircuit, Pool, workspaceIdOf } from "./design-fixtures";
-import { signInWithPassword } from "./http-session";
+import { signIn } from "./bench-session";
+import { createDemoDesign, demoCircuit, Pool } from "./design-fixtures";
 
 const baseUrl = inject("baseUrl");
 const pool = new Pool({ connectionString: inject("databaseUrl") });
@@ -47,14 +47,7 @@ const signed = (v: number) => `${v >= 0 ? "+" : "−"}${Math.abs(v).toFixed(2)}`
 const hz = (v: number) => (v >= 1000 ? `${(v / 1000).toPrecision(3)} kHz` : `${v.toPrecision(3)} Hz`);
 
 beforeAll(async () => {
-  const workspaceId = await workspaceIdOf(pool, DEMO_WORKSPACE.slug);
-  const designer = await signInWithPassword(baseUrl, DEMO.designer, DEMO_PASSWORD);
-  if (!designer.ok) throw new Error(designer.error ?? "sign-in failed");
-  const created = await designer.session.fetch(`/api/workspaces/${workspaceId}/designs`, { method: "POST", body: { title: TITLE, circuit: demoCircuit() } });
-  expect(created.status).toBe(201);
-  const body = await created.json();
-  designId = body.design.id;
-  revisionId = body.revisionId;
+  ({ designId, revisionId } = await createDemoDesign(baseUrl, pool, TITLE));
   // The measured spectrum sits on the simulation's own noise frequencies, so no interpolation enters the expectation.
   const noise = runCircuit(demoCircuit()).noise;
   if (!noise) throw new Error("the demo circuit has no noise analysis");
@@ -62,11 +55,7 @@ beforeAll(async () => {
   csv = `Frequency (Hz),Noise (V/√Hz)\n${points.map((p) => `${p.f},${p.density.toPrecision(12)}`).join("\n")}\n`;
   browser = await openBrowser({ width: 1440, height: 1000 });
   page = await browser.context.newPage();
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel("E-mail").fill(DEMO.designer);
-  await page.getByLabel("Password").fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
+  await signIn(page, baseUrl);
 });
 
 afterAll(async () => {

@@ -7,8 +7,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { DEMO_PASSWORD, DEMO_WORKSPACE } from "../../db/demo-people";
 import { type Browser, openBrowser, screenshotPath } from "./chromium";
-import { DEMO, demoCircuit, Pool, workspaceIdOf } from "./design-fixtures";
-import { signInWithPassword } from "./http-session";
+import { createDemoDesign, DEMO, Pool } from "./design-fixtures";
 import { linkIn, mailTo } from "./people";
 
 const baseUrl = inject("baseUrl");
@@ -28,12 +27,7 @@ const people: Record<"margit" | "orla", { id: string; name: string; email: strin
 const reviewCount = async () => (await pool.query("SELECT count(*)::int AS n FROM reviews WHERE design_id = $1", [designId])).rows[0].n as number;
 
 beforeAll(async () => {
-  const workspaceId = await workspaceIdOf(pool, DEMO_WORKSPACE.slug);
-  const designer = await signInWithPassword(baseUrl, DEMO.designer, DEMO_PASSWORD);
-  if (!designer.ok) throw new Error(designer.error ?? "sign-in failed");
-  const created = await designer.session.fetch(`/api/workspaces/${workspaceId}/designs`, { method: "POST", body: { title: TITLE, circuit: demoCircuit() } });
-  expect(created.status).toBe(201);
-  designId = (await created.json()).design.id;
+  ({ designId } = await createDemoDesign(baseUrl, pool, TITLE));
   const { rows } = await pool.query("SELECT id, name, email FROM users WHERE email = ANY($1)", [[people.margit.email, people.orla.email]]);
   for (const row of rows) Object.assign(row.email === people.margit.email ? people.margit : people.orla, { id: row.id, name: row.name });
   browser = await openBrowser();
