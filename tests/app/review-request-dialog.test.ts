@@ -1,8 +1,8 @@
 /**
  * The "Request review" dialog on the design page, in Chromium: a designer picks two reviewers, a due day and a
  * message, sends, lands on the new review, sees it listed on the design page, and each reviewer gets a mail through
- * the SMTP fake with the review's link and the message. Sending with no reviewer picked is refused in the dialog
- * and nothing is stored.
+ * the SMTP fake with the review's link and the message. Sending with no reviewer picked, or with a day already gone,
+ * is refused in the dialog with what to fix, and nothing is stored.
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { DEMO_PASSWORD, DEMO_WORKSPACE } from "../../db/demo-people";
@@ -63,7 +63,15 @@ describe("the request-review dialog", () => {
 
     await dialog.getByRole("checkbox", { name: new RegExp(people.margit.name) }).check();
     await dialog.getByRole("checkbox", { name: new RegExp(people.orla.name) }).check();
+    // the refusal went away once a reviewer was picked, so it does not sit beside a form that is now fine
+    await expect(dialog.getByRole("alert").count()).resolves.toBe(0);
+    // a day already gone: the server's refusal is shown as sent, and again nothing is stored
+    await dialog.getByLabel("Due by (optional)").fill("2001-01-01");
+    await dialog.getByRole("button", { name: "Send request" }).click();
+    await expect.poll(() => dialog.getByRole("alert").textContent()).toBe("The due date is in the past. Choose a day from today on.");
+    expect(await reviewCount()).toBe(0);
     await dialog.getByLabel("Due by (optional)").fill(DUE);
+    await expect(dialog.getByRole("alert").count()).resolves.toBe(0);
     await page.screenshot({ path: screenshotPath("request-review-dialog") });
     await dialog.getByRole("button", { name: "Send request" }).click();
 
