@@ -146,6 +146,7 @@ export async function insertDesignWithRevision(
     status?: DesignStatus;
     createdBy: string;
     circuit: Record<string, unknown>;
+    layout?: Record<string, unknown>;
     message: string;
     forkedFromDesignId?: string;
     forkedFromRevisionId?: string;
@@ -165,7 +166,7 @@ export async function insertDesignWithRevision(
     .returning({ id: designs.id });
   const [revision] = await tx
     .insert(designRevisions)
-    .values({ designId: design.id, number: 1, circuit: values.circuit, message: values.message, authorId: values.createdBy })
+    .values({ designId: design.id, number: 1, circuit: values.circuit, layout: values.layout ?? {}, message: values.message, authorId: values.createdBy })
     .returning({ id: designRevisions.id });
   await tx.update(designs).set({ headRevisionId: revision.id }).where(eq(designs.id, design.id));
   return { designId: design.id, revisionId: revision.id };
@@ -186,6 +187,7 @@ export async function createDesign(
       description: input.description?.trim() ?? "",
       createdBy: actorId,
       circuit,
+      layout: input.layout,
       message,
     });
     await recordAudit(tx, {

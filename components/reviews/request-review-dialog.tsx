@@ -23,12 +23,16 @@ export function RequestReviewDialog({ designId, revisions, reviewers }: { design
   const [picked, setPicked] = useState<string[]>([]);
   const [dueAt, setDueAt] = useState("");
   const [message, setMessage] = useState("");
-  const { submit, error, busy } = useSubmit(createReviewSchema, async (input) => {
+  const { submit, error, busy, clear } = useSubmit(createReviewSchema, async (input) => {
     const { path } = await requestReview(designId, input);
     dialog.current?.close();
     router.push(path);
   });
-  const toggle = (id: string) => setPicked((now) => (now.includes(id) ? now.filter((x) => x !== id) : [...now, id]));
+  // a refusal ("Pick at least one reviewer") is about the choices: changing them takes it away until the next send
+  const toggle = (id: string) => {
+    clear();
+    setPicked((now) => (now.includes(id) ? now.filter((x) => x !== id) : [...now, id]));
+  };
   return (
     <>
       <button type="button" className={primaryButton} onClick={() => dialog.current?.showModal()} disabled={revisions.length === 0}>
@@ -72,7 +76,10 @@ export function RequestReviewDialog({ designId, revisions, reviewers }: { design
           </fieldset>
           <label className="block text-sm font-medium">
             Due by (optional)
-            <input type="date" value={dueAt} onChange={(e) => setDueAt(e.target.value)} className="mt-1 w-full rounded-md border border-rule bg-white/70 px-2 py-1.5" />
+            <input type="date" value={dueAt} onChange={(e) => {
+                clear();
+                setDueAt(e.target.value);
+              }} className="mt-1 w-full rounded-md border border-rule bg-white/70 px-2 py-1.5" />
           </label>
           <label className="block text-sm font-medium">
             Message

@@ -8,7 +8,7 @@ import { ApiError } from "@/components/api/client";
 /**
  * A small form helper for the review forms: validates with the shared zod schema first (field messages at once),
  * sends, shows the server's message on refusal and refreshes the page's server data on success. The typed text
- * stays in the form when anything fails.
+ * stays in the form when anything fails; `clear` takes a refusal away once the person changes what it was about.
  */
 export function useSubmit<T>(schema: ZodType<T>, send: (input: T) => Promise<unknown>, onDone?: () => void) {
   const router = useRouter();
@@ -40,5 +40,9 @@ export function useSubmit<T>(schema: ZodType<T>, send: (input: T) => Promise<unk
       setBusy(false);
     }
   }
-  return { submit, error, fields, busy };
+  function clear() {
+    setError(null);
+    setFields({});
+  }
+  return { submit, error, fields, busy, clear };
 }

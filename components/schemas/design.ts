@@ -40,6 +40,8 @@ export const createDesignSchema = z.object({
   description: z.string().trim().max(2000, { error: "Keep the description to 2000 characters or fewer." }).default(""),
   /** Omitted: start from the empty starting circuit. */
   circuit: circuitObjectSchema.optional(),
+  /** The drawing of `circuit` (a starting point's); omitted: the bench lays the circuit out when it opens. */
+  layout: z.record(z.string(), z.unknown()).optional(),
   message: z.string().trim().max(500).optional(),
 });
 export type CreateDesignInput = z.input<typeof createDesignSchema>;

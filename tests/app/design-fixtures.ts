@@ -7,6 +7,7 @@ import { Pool } from "pg";
 import demo from "../../sim/examples/demo-microphone.json";
 import { DEMO_PASSWORD } from "../../db/demo-people";
 import { type HttpSession, signInWithPassword } from "./http-session";
+import { DEMO_WORKSPACE } from "../../db/demo-people";
 
 export const DEMO = {
   owner: "orla@larkfield.example",
@@ -52,6 +53,17 @@ export async function foreignWorkspace(pool: Pool): Promise<{ workspaceId: strin
   );
   await pool.query("UPDATE designs SET head_revision_id = $1 WHERE id = $2", [revision.id, design.id]);
   return { workspaceId: ws.id, designId: design.id, revisionId: revision.id };
+}
+
+/** A fresh design of the demo circuit in the demo workspace, made by the demo designer over the API. */
+export async function createDemoDesign(baseUrl: string, pool: Pool, title: string): Promise<{ workspaceId: string; designId: string; revisionId: string }> {
+  const workspaceId = await workspaceIdOf(pool, DEMO_WORKSPACE.slug);
+  const designer = await signInWithPassword(baseUrl, DEMO.designer, DEMO_PASSWORD);
+  if (!designer.ok) throw new Error(`sign-in as ${DEMO.designer} failed: ${designer.error}`);
+  const created = await designer.session.fetch(`/api/workspaces/${workspaceId}/designs`, { method: "POST", body: { title, circuit: demoCircuit() } });
+  if (created.status !== 201) throw new Error(`creating “${title}” answered ${created.status}: ${await created.text()}`);
+  const body = await created.json();
+  return { workspaceId, designId: body.design.id, revisionId: body.revisionId };
 }
 
 export { Pool };

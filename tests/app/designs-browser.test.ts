@@ -2,11 +2,12 @@ import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { DEMO_PASSWORD, DEMO_WORKSPACE } from "../../db/demo-people";
 import { type Browser, openBrowser, screenshotPath } from "./chromium";
-import { withParameter } from "./design-fixtures";
+import { Pool, withParameter } from "./design-fixtures";
 
 const baseUrl = inject("baseUrl");
 const DESIGN = "LA-47 studio condenser";
 const PHONE = { width: 390, height: 844 };
+const pool = new Pool({ connectionString: inject("databaseUrl") });
 
 async function signIn(page: Page, email: string) {
   await page.goto(`${baseUrl}/sign-in?callbackUrl=/w/${DEMO_WORKSPACE.slug}`);
@@ -45,6 +46,7 @@ describe("designs in Chromium", () => {
   });
   afterAll(async () => {
     await browser.close();
+    await pool.end();
   });
 
   it("the demo reviewer opens a design from the table, sees its history and what changed, and cannot save", async () => {
@@ -124,6 +126,47 @@ describe("designs in Chromium", () => {
       linkAddress = (await page.getByTestId("new-bench-link").textContent()) ?? "";
       expect(linkAddress).toMatch(/\/b\/[A-Za-z0-9_-]{43}$/);
       await page.getByText("For the review meeting").waitFor();
+      await page.close();
+    } finally {
+      await designer.close();
+    }
+  });
+
+  it("a designer starts a design from a starting point on the new-design form, and its bench opens with that circuit", async () => {
+    const designer = await openBrowser();
+    try {
+      const page = await designer.context.newPage();
+      await signIn(page, "tomas@larkfield.example");
+      const title = `Valve and follower ${Date.now()}`;
+      await page.getByRole("button", { name: "New design" }).click();
+      const form = page.getByRole("form", { name: "New design" });
+      await form.getByLabel("Title", { exact: true }).fill(title);
+      await form.getByRole("radio", { name: /Valve with a bipolar follower/ }).check();
+      await shoot(page, "new-design-starting-point");
+      await form.getByRole("button", { name: "Create design" }).click();
+      await page.waitForURL(/\/w\/larkfield\/designs\/[0-9a-f-]+$/);
+      await page.getByRole("heading", { level: 1, name: title }).waitFor();
+      await expect(page.getByRole("list", { name: "Revisions, newest first" }).textContent()).resolves.toContain("Started from “Valve with a bipolar follower”");
+
+      await page.getByRole("link", { name: "Open the bench" }).click();
+      await page.waitForURL(/\/bench$/);
+      await page.locator("[data-part]").first().waitFor();
+      // What was stored: the head revision's circuit and its drawing, read straight from PostgreSQL.
+      const { rows } = await pool.query(
+        "SELECT r.circuit, r.layout FROM designs d JOIN design_revisions r ON r.id = d.head_revision_id WHERE d.title = $1",
+        [title],
+      );
+      expect(rows).toHaveLength(1);
+      const parts = rows[0].circuit.parts as { id: string; kind: string }[];
+      // The topology as the trade names it (common practice): a triode stage, a bipolar follower after it, and the
+      // destination it drives.
+      expect(parts.map((p) => p.kind)).toEqual(expect.arrayContaining(["triode", "bjt", "load"]));
+      expect(Object.keys(rows[0].layout.parts ?? {}).sort()).toEqual(parts.map((p) => p.id).sort());
+      // Every part is drawn on the bench, and nothing else; a bench with parts does not offer "Start from…".
+      await expect
+        .poll(() => page.locator("[data-part]").evaluateAll((nodes) => nodes.map((n) => n.getAttribute("data-part") ?? "").sort()))
+        .toEqual(parts.map((p) => p.id).sort());
+      await expect(page.getByTestId("start-from").count()).resolves.toBe(0);
       await page.close();
     } finally {
       await designer.close();

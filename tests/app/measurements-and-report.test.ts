@@ -157,9 +157,12 @@ describe("a measurement on the bench", () => {
   });
 
   it("attaches the PDF to the revision's review, stored through the S3 client and served only as a download", async () => {
-    const { rows } = await pool.query("SELECT id FROM reviews WHERE revision_id = $1 LIMIT 1", [revisionId]);
+    // The seeded review's revision, which is the head only until another test file saves a revision of LA-47
+    // (designs-browser.test.ts does), so it is looked up rather than assumed.
+    const { rows } = await pool.query("SELECT id, revision_id FROM reviews WHERE design_id = $1 ORDER BY created_at LIMIT 1", [designId]);
     expect(rows).toHaveLength(1);
-    const attached = await designer.fetch(`/api/workspaces/${workspaceId}/designs/${designId}/revisions/${revisionId}/report/attach`, { method: "POST", body: { reviewId: rows[0].id } });
+    const reviewedRevisionId = rows[0].revision_id as string;
+    const attached = await designer.fetch(`/api/workspaces/${workspaceId}/designs/${designId}/revisions/${reviewedRevisionId}/report/attach`, { method: "POST", body: { reviewId: rows[0].id } });
     expect(attached.status).toBe(201);
     const { attachment } = await attached.json();
     expect((await bucket.keys(`designs/${designId}/reports/`)).some((k) => k.endsWith(attachment.filename))).toBe(true);
@@ -168,7 +171,7 @@ describe("a measurement on the bench", () => {
     expect(download.headers.get("content-disposition")).toMatch(/^attachment;/);
     expect(download.headers.get("x-content-type-options")).toBe("nosniff");
     expect(Buffer.from(await download.arrayBuffer()).subarray(0, 5).toString()).toBe("%PDF-");
-    const wrong = await designer.fetch(`/api/workspaces/${workspaceId}/designs/${designId}/revisions/${revisionId}/report/attach`, { method: "POST", body: { reviewId: "not-an-id" } });
+    const wrong = await designer.fetch(`/api/workspaces/${workspaceId}/designs/${designId}/revisions/${reviewedRevisionId}/report/attach`, { method: "POST", body: { reviewId: "not-an-id" } });
     expect(wrong.status).toBe(422);
   });
 });

@@ -14,11 +14,18 @@ import { openDocument } from "@/components/bench/document/document";
 import { createDesign } from "@/db/designs";
 import { saveRevision } from "@/db/revisions";
 import { getMembership } from "@/db/memberships";
+import { runCircuit } from "@/sim/run";
 import { demoCircuit, makeUser, makeWorkspace } from "./design-fixtures";
 import { sweepCsv } from "./storage-client";
 
 const OUT = path.resolve("tests/output/report");
 let pdf: Buffer;
+/**
+ * A measured noise spectrum's excess over the simulation, dB: a flicker corner of 400 Hz on the same floor, raised
+ * 1.5 dB (handbook form e_w·√(1 + f_c/f) of 1/f plus white noise). It falls with f, so over the audio band its
+ * largest value lies at the lowest measured point, 20 Hz.
+ */
+const noiseExcessDb = (f: number) => 1.5 + 10 * Math.log10(1 + 400 / f);
 
 beforeAll(async () => {
   const userId = await makeUser("Ines Caldero");
@@ -32,6 +39,15 @@ beforeAll(async () => {
   await uploadMeasurement({
     workspaceId, designId, userId, filename: "bench-sweep.csv", bytes: new TextEncoder().encode(sweepCsv(50, 6).csv),
     mappingJson: JSON.stringify({ kind: "frequency_response", name: "Bench sweep", frequencyColumn: 0, levelColumn: 1, phaseColumn: null, frequencyUnit: "Hz", levelUnit: "dB" }),
+    revisionId,
+  });
+  // the spectrum sits on the simulation's own noise frequencies, in V/√Hz, so the expectation needs no interpolation
+  const noise = runCircuit(circuit).noise;
+  if (!noise) throw new Error("the demo circuit has no noise analysis");
+  const noiseLines = noise.frequency.map((f, i) => `${f},${(noise.output_density[i] * 10 ** (noiseExcessDb(f) / 20)).toPrecision(12)}`);
+  await uploadMeasurement({
+    workspaceId, designId, userId, filename: "rig-noise.csv", bytes: new TextEncoder().encode(`Frequency (Hz),Noise (V/rtHz)\n${noiseLines.join("\n")}\n`),
+    mappingJson: JSON.stringify({ kind: "noise_spectrum", name: "Rig noise", frequencyColumn: 0, levelColumn: 1, phaseColumn: null, frequencyUnit: "Hz", levelUnit: "V" }),
     revisionId,
   });
   const membership = await getMembership(workspaceId, userId);
@@ -59,6 +75,16 @@ describe("sign-off report PDF", () => {
     }
     expect(text).toContain("Bench sweep");
     expect(text).toMatch(/Larkfield LA-7 front end r2 · generated/);
+  });
+
+  it("lists the noise spectrum with the hand-computed largest deviation, compared as measured, and plots it", () => {
+    const text = execFileSync("pdftotext", ["-layout", path.join(OUT, "report.pdf"), "-"]).toString();
+    // the table row, not the plot legend ("Rig noise (measured)")
+    const row = text.split("\n").find((line) => line.includes("Rig noise") && !line.includes("(measured)")) ?? "";
+    expect(row).toContain("Noise spectrum");
+    expect(row).toContain("none (absolute)");
+    expect(row).toContain(`${noiseExcessDb(20).toFixed(2)} dB`);
+    expect(text).toContain("Noise measurements against simulation");
   });
 
   it("numbers every page 'Page N of M' in its footer, beside the design name and revision", () => {

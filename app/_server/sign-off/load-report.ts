@@ -7,6 +7,8 @@ import "server-only";
 import { openDocument } from "@/components/bench/document/document";
 import { hazardReasons } from "@/components/bench/document/hazards";
 import { compareMeasurement } from "@/components/bench/measurements/compare";
+import { compareNoise } from "@/components/bench/measurements/compare-noise";
+import { dbvToDensity } from "@/components/bench/measurements/measurement-overlay";
 import { withDestination } from "@/components/bench/destinations/with-destination";
 import { DEFAULT_CABLE_LENGTH_M, DESTINATION_PRESETS } from "@/components/bench/destinations/presets";
 import { OVERLAY_COLOURS, PLOT_COLOURS } from "@/components/bench/plots/palette";
@@ -91,23 +93,46 @@ export async function loadReport(
 
   const measurements: ReportModel["measurements"] = [];
   const measuredSeries: PlotSeries[] = [];
+  const measuredNoiseSeries: PlotSeries[] = [];
   for (const [i, m] of measured.entries()) {
+    const colour = OVERLAY_COLOURS[(i + 2) % OVERLAY_COLOURS.length];
     const base = { name: m.name, kind: m.kind === "noise_spectrum" ? "Noise spectrum" : "Frequency response", points: m.data.frequency.length, band: "20 Hz – 20 kHz" };
-    if (m.kind !== "frequency_response" || !doc?.ac) {
-      measurements.push({ ...base, offset: "—", maxDeviation: "—", at: "—", problem: m.kind === "noise_spectrum" ? "A noise spectrum is listed, not compared with the response." : "No simulated response to compare with." });
+    const refused = (problem: string) => measurements.push({ ...base, offset: "—", maxDeviation: "—", at: "—", problem });
+    if (m.kind === "noise_spectrum") {
+      // noise is absolute: compared as measured, no offset (compare-noise.ts)
+      if (!doc?.noise) {
+        refused("No simulated noise to compare with.");
+        continue;
+      }
+      const result = compareNoise(doc.noise, m.data, REPORT_BAND);
+      if (!result.ok) {
+        refused(result.message);
+        continue;
+      }
+      const c = result.comparison;
+      measurements.push({ ...base, offset: "none (absolute)", maxDeviation: c.max ? formatFixed(c.max.deviation_db, 2, "dB") : "—", at: c.max ? formatSi(c.max.frequency, "Hz") : "—" });
+      measuredNoiseSeries.push({ label: `${m.name} (measured)`, colour, frequency: c.frequency, values: c.measured_dbv.map(dbvToDensity), dashed: true });
+      continue;
+    }
+    if (!doc?.ac) {
+      refused("No simulated response to compare with.");
       continue;
     }
     const result = compareMeasurement({ frequency: doc.ac.frequency, level_db: doc.ac.magnitude_db }, m.data, REPORT_BAND);
     if (!result.ok) {
-      measurements.push({ ...base, offset: "—", maxDeviation: "—", at: "—", problem: result.message });
+      refused(result.message);
       continue;
     }
     const c = result.comparison;
     measurements.push({ ...base, offset: formatFixed(c.offset_db, 2, "dB"), maxDeviation: c.max ? formatFixed(c.max.deviation_db, 2, "dB") : "—", at: c.max ? formatSi(c.max.frequency, "Hz") : "—" });
-    measuredSeries.push({ label: `${m.name} (aligned at 1 kHz)`, colour: OVERLAY_COLOURS[(i + 2) % OVERLAY_COLOURS.length], frequency: c.frequency, values: c.measured_aligned_db, dashed: true });
+    measuredSeries.push({ label: `${m.name} (aligned at 1 kHz)`, colour, frequency: c.frequency, values: c.measured_aligned_db, dashed: true });
   }
   if (measuredSeries.length > 0 && doc?.ac) {
     const p = plot("Measurements against simulation", [{ label: "Simulated", colour: PLOT_COLOURS.trace, frequency: doc.ac.frequency, values: doc.ac.magnitude_db }, ...measuredSeries], "dB");
+    if (p) plots.push(p);
+  }
+  if (measuredNoiseSeries.length > 0 && doc?.noise) {
+    const p = plot("Noise measurements against simulation", [{ label: "Simulated output noise", colour: PLOT_COLOURS.trace, frequency: doc.noise.frequency, values: doc.noise.output_density }, ...measuredNoiseSeries], "V/√Hz", true);
     if (p) plots.push(p);
   }
 

@@ -1,4 +1,7 @@
-/** A small SVG of the difference curve (aligned measurement − simulation) on a log-f axis, with the band shaded. */
+/**
+ * A small SVG of the difference curve (measurement − simulation: aligned for a response, as measured for a noise
+ * spectrum) on a log-f axis, with the band shaded.
+ */
 import { PLOT_COLOURS } from "../plots/palette";
 import type { Comparison } from "./compare";
 
@@ -6,7 +9,7 @@ const W = 420;
 const H = 140;
 const PAD = { l: 40, r: 8, t: 8, b: 22 };
 
-export function DifferencePlot({ comparison }: { comparison: Comparison }) {
+export function DifferencePlot({ comparison }: { comparison: Pick<Comparison, "frequency" | "difference_db" | "band"> }) {
   const { frequency: f, difference_db: d, band } = comparison;
   if (f.length < 2) return null;
   const lx0 = Math.log10(f[0]);

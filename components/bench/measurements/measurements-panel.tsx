@@ -1,47 +1,45 @@
 "use client";
 /**
  * The bench's Measurements tab: the design's uploaded measurements, an upload with preview (designers), and the
- * comparison of one measurement with the live simulation — level offset at the alignment frequency, the difference
- * curve, and the largest deviation inside a chosen band, in a table beside the plot. The aligned measurement is
- * handed up (`onOverlay`) to be drawn on the Bode plot.
+ * comparison of one measurement with the live simulation — for a frequency response the level offset at the
+ * alignment frequency, for a noise spectrum the absolute levels — with the difference curve and the largest deviation
+ * inside a chosen band, in a table beside the plot. The measured curve is handed up (`onOverlay`) to be drawn on the
+ * Bode plot (a response) or the noise density plot (a noise spectrum).
  */
 import { useEffect, useMemo, useState } from "react";
 import type { MeasuredCurve } from "@/components/measurements/parse-measurement";
-import { type Curve, compareMeasurement, DEFAULT_ALIGN_HZ } from "./compare";
+import { type Curve, DEFAULT_ALIGN_HZ } from "./compare";
+import { ComparisonTable } from "./comparison-table";
 import { DifferencePlot } from "./difference-plot";
+import { compareChosen, type MeasurementKind, type MeasurementOverlay, overlayOf, type SimulatedNoise } from "./measurement-overlay";
 import { UploadMeasurement } from "./upload-measurement";
+
+export type { MeasurementOverlay };
 
 interface Summary {
   id: string;
   name: string;
-  kind: "frequency_response" | "noise_spectrum";
+  kind: MeasurementKind;
   uploadedByName: string | null;
-}
-
-export interface MeasurementOverlay {
-  id: string;
-  label: string;
-  frequency: number[];
-  level_db: number[];
 }
 
 export interface MeasurementsPanelProps {
   workspaceId: string;
   designId: string;
   canUpload: boolean;
+  /** the live magnitude response, dB */
   simulated: Curve | null;
+  /** the live noise analysis (absent when the circuit has none) */
+  simulatedNoise: SimulatedNoise | null;
   onOverlay: (overlay: MeasurementOverlay | null) => void;
 }
 
-const fmt = (v: number, digits = 2) => (v >= 0 ? `+${v.toFixed(digits)}` : `−${Math.abs(v).toFixed(digits)}`);
-const hz = (v: number) => (v >= 1000 ? `${(v / 1000).toPrecision(3)} kHz` : `${v.toPrecision(3)} Hz`);
-
-export function MeasurementsPanel({ workspaceId, designId, canUpload, simulated, onOverlay }: MeasurementsPanelProps) {
+export function MeasurementsPanel({ workspaceId, designId, canUpload, simulated, simulatedNoise, onOverlay }: MeasurementsPanelProps) {
   const url = `/api/workspaces/${workspaceId}/designs/${designId}/measurements`;
   const [list, setList] = useState<Summary[] | null>(null);
   const [listError, setListError] = useState<string | null>(null);
   const [chosen, setChosen] = useState<string>("");
-  const [curve, setCurve] = useState<{ id: string; name: string; data: MeasuredCurve } | null>(null);
+  const [curve, setCurve] = useState<{ id: string; name: string; kind: MeasurementKind; data: MeasuredCurve } | null>(null);
   const [band, setBand] = useState({ fromHz: 20, toHz: 20_000, alignHz: DEFAULT_ALIGN_HZ });
   const [refresh, setRefresh] = useState(0);
 
@@ -67,7 +65,7 @@ export function MeasurementsPanel({ workspaceId, designId, canUpload, simulated,
       .then(async (r) => {
         const data = await r.json();
         if (!r.ok) throw new Error(data?.error?.message ?? "The measurement could not be read.");
-        if (alive) setCurve({ id: data.measurement.id, name: data.measurement.name, data: data.measurement.data });
+        if (alive) setCurve({ id: data.measurement.id, name: data.measurement.name, kind: data.measurement.kind, data: data.measurement.data });
       })
       .catch((e) => alive && setListError(e instanceof Error ? e.message : String(e)));
     return () => {
@@ -75,16 +73,15 @@ export function MeasurementsPanel({ workspaceId, designId, canUpload, simulated,
     };
   }, [url, chosen]);
 
-  const result = useMemo(
-    () => (curve && simulated ? compareMeasurement(simulated, curve.data, band) : null),
-    [curve, simulated, band],
+  const chosenComparison = useMemo(
+    () => (curve ? compareChosen(curve.kind, curve.data, { response: simulated, noise: simulatedNoise }, band) : null),
+    [curve, simulated, simulatedNoise, band],
   );
+  const result = chosenComparison?.result ?? null;
 
   useEffect(() => {
-    if (!curve || !result?.ok) return onOverlay(null);
-    const c = result.comparison;
-    onOverlay({ id: `measurement-${curve.id}`, label: `${curve.name} (measured, ${fmt(c.offset_db, 1)} dB)`, frequency: c.frequency, level_db: c.measured_aligned_db });
-  }, [curve, result, onOverlay]);
+    onOverlay(curve && chosenComparison ? overlayOf(chosenComparison, curve) : null);
+  }, [curve, chosenComparison, onOverlay]);
 
   const numberInput = (label: string, key: keyof typeof band) => (
     <label className="flex flex-col gap-0.5 text-xs">
@@ -133,23 +130,16 @@ export function MeasurementsPanel({ workspaceId, designId, canUpload, simulated,
         <div className="flex flex-wrap gap-3">
           {numberInput("Band from (Hz)", "fromHz")}
           {numberInput("Band to (Hz)", "toHz")}
-          {numberInput("Align at (Hz)", "alignHz")}
+          {curve?.kind !== "noise_spectrum" && numberInput("Align at (Hz)", "alignHz")}
         </div>
         {result && !result.ok && <p role="alert" className="text-xs text-caution">{result.message}</p>}
-        {result?.ok && (
+        {chosenComparison?.result.ok && (
           <>
-            <table className="text-sm" aria-label="Measurement against simulation" data-testid="comparison-table">
-              <tbody>
-                <tr><th className="pr-4 text-left font-medium text-ink-soft">Level offset at {hz(result.comparison.alignHz)}</th><td className="font-mono" data-testid="offset-db">{fmt(result.comparison.offset_db)} dB</td></tr>
-                <tr><th className="pr-4 text-left font-medium text-ink-soft">Largest deviation, {hz(result.comparison.band.fromHz)} – {hz(result.comparison.band.toHz)}</th><td className="font-mono" data-testid="max-deviation-db">{result.comparison.max ? `${fmt(result.comparison.max.deviation_db)} dB` : "no points in the band"}</td></tr>
-                <tr><th className="pr-4 text-left font-medium text-ink-soft">At</th><td className="font-mono" data-testid="max-deviation-hz">{result.comparison.max ? hz(result.comparison.max.frequency) : "—"}</td></tr>
-                <tr><th className="pr-4 text-left font-medium text-ink-soft">Points compared</th><td className="font-mono">{result.comparison.frequency.length}</td></tr>
-              </tbody>
-            </table>
-            <DifferencePlot comparison={result.comparison} />
+            <ComparisonTable chosen={chosenComparison} />
+            <DifferencePlot comparison={chosenComparison.result.comparison} />
           </>
         )}
-        {!curve && <p className="text-xs text-ink-soft">Choose a measurement to compare it with the simulated response.</p>}
+        {!curve && <p className="text-xs text-ink-soft">Choose a measurement to compare it with the simulated response or noise.</p>}
       </div>
     </div>
   );

@@ -17,6 +17,7 @@ import {
   type Envelope,
   IMPEDANCE_LAYOUT,
   impedanceTraces,
+  type MeasuredNoiseCurve,
   NOISE_LAYOUT,
   noiseTraces,
   type PlotCurve,
@@ -26,6 +27,8 @@ export interface PlotsPanelProps {
   curves: PlotCurve[];
   envelope?: Envelope | null;
   noise?: NoiseResult | null;
+  /** a measured noise spectrum laid over the simulated density (from the Measurements tab) */
+  measuredNoise?: MeasuredNoiseCurve | null;
   impedance: { frequency: number[]; magnitude_ohm: number[] } | null;
   /** the live result's generation, reported when the Bode plot has drawn it */
   generation: number;
@@ -47,12 +50,12 @@ function fileStem(title: string): string {
     .toLowerCase();
 }
 
-export default function PlotsPanel({ curves, envelope, noise, impedance, generation, title }: PlotsPanelProps) {
+export default function PlotsPanel({ curves, envelope, noise, measuredNoise, impedance, generation, title }: PlotsPanelProps) {
   const [tab, setTab] = useState<PlotName>("bode");
   const elements = useRef<Partial<Record<PlotName, HTMLElement>>>({});
   const bode = useMemo(() => bodeTraces(curves, envelope), [curves, envelope]);
   const anchor = useAnchorRange();
-  const noiseData = useMemo(() => (noise ? noiseTraces(noise) : []), [noise]);
+  const noiseData = useMemo(() => (noise ? noiseTraces(noise, measuredNoise) : []), [noise, measuredNoise]);
   const zout = useMemo(
     () => (impedance ? impedanceTraces(impedance.frequency, impedance.magnitude_ohm) : []),
     [impedance],
@@ -85,6 +88,7 @@ export default function PlotsPanel({ curves, envelope, noise, impedance, generat
     ]);
     if (impedance) series.push({ name: "zout_ohm", frequency: impedance.frequency, values: impedance.magnitude_ohm });
     if (noise) series.push({ name: "noise_v_per_rthz", frequency: noise.frequency, values: noise.output_density });
+    if (measuredNoise) series.push({ name: `${measuredNoise.label} v_per_rthz`, frequency: measuredNoise.frequency, values: measuredNoise.density });
     downloadText(`${fileStem(title)}-results.csv`, resultsCsv(series));
   };
 

@@ -163,7 +163,15 @@ export interface NoiseData {
 /** Parts contributing less than this fraction of the total power everywhere are left out (they only crowd the plot). */
 export const NOISE_CONTRIBUTION_SHOWN_FRACTION = 1e-4;
 
-export function noiseTraces(noise: NoiseData): unknown[] {
+/** A measured noise spectrum in the plot's unit (V/√Hz), drawn dashed over the simulated total. */
+export interface MeasuredNoiseCurve {
+  label: string;
+  frequency: number[];
+  density: number[];
+  colour: string;
+}
+
+export function noiseTraces(noise: NoiseData, measured?: MeasuredNoiseCurve | null): unknown[] {
   const traces: unknown[] = [
     {
       x: noise.frequency,
@@ -183,6 +191,16 @@ export function noiseTraces(noise: NoiseData): unknown[] {
       mode: "lines",
       name: part,
       line: { color: OVERLAY_COLOURS[i++ % OVERLAY_COLOURS.length], width: 1.5 },
+    });
+  }
+  if (measured) {
+    traces.push({
+      x: measured.frequency,
+      y: measured.density,
+      mode: "lines+markers",
+      name: measured.label,
+      line: { color: measured.colour, width: 2, dash: "dash" },
+      marker: { size: 4, color: measured.colour },
     });
   }
   return traces;

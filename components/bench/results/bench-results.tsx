@@ -71,6 +71,8 @@ export interface BenchLiveState {
 }
 
 const NO_OVERLAYS: OverlayChoice = { variants: [], revisions: [] };
+/** One colour for a measured curve on either plot, apart from the overlay family's. */
+const MEASURED_COLOUR = "#b4410b";
 
 export function BenchResults({
   document,
@@ -130,13 +132,27 @@ export function BenchResults({
     };
   }, [doc, variant]);
 
+  // stable between renders, so the measurements panel compares again only when the result changes
+  const simulatedResponse = useMemo(
+    () => (liveCurve ? { frequency: liveCurve.frequency, level_db: liveCurve.magnitude_db } : null),
+    [liveCurve],
+  );
+  const measuredNoise = useMemo(
+    () =>
+      measured?.kind === "noise_spectrum"
+        ? { label: measured.label, frequency: measured.frequency, density: measured.density_v, colour: MEASURED_COLOUR }
+        : null,
+    [measured],
+  );
+
   const familyCurves = family.result?.curves ?? [];
   const curves = useMemo(() => {
     const list: PlotCurve[] = [];
     if (liveCurve) list.push(liveCurve);
     if (pinned) list.push(pinned.curve);
-    // a measurement has no simulated phase to sit beside; only its (aligned) magnitude is drawn
-    if (measured) list.push({ ...measured, magnitude_db: measured.level_db, phase_deg: [], style: "overlay", colour: "#b4410b" });
+    // a measured response has no simulated phase to sit beside; only its (aligned) magnitude is drawn
+    if (measured?.kind === "frequency_response")
+      list.push({ ...measured, magnitude_db: measured.level_db, phase_deg: [], style: "overlay", colour: MEASURED_COLOUR });
     familyCurves.forEach((c, i) => {
       if (!c.error)
         list.push({
@@ -248,6 +264,7 @@ export function BenchResults({
             curves={curves}
             envelope={envelope}
             noise={doc.noise ?? null}
+            measuredNoise={measuredNoise}
             impedance={live.impedance}
             generation={live.resultGeneration}
             title={document.circuit.title}
@@ -299,7 +316,8 @@ export function BenchResults({
                 workspaceId={revisions.workspaceId}
                 designId={revisions.designId}
                 canUpload={!readOnly}
-                simulated={liveCurve ? { frequency: liveCurve.frequency, level_db: liveCurve.magnitude_db } : null}
+                simulated={simulatedResponse}
+                simulatedNoise={doc?.noise ?? null}
                 onOverlay={setMeasured}
               />
             ) : (
