@@ -6,8 +6,14 @@
  * output). Beside each median the best of the same runs is printed (best-of-N, N = REPEATS): the machine is shared
  * with other builds, and the best run shows what the code costs without their load. `--json` prints
  * { "cases": [...] } only.
+ *
+ * Each case runs in a child process of its own (`--case NAME`, result over IPC): a case timed after another one
+ * inherits its heap (mathjs leaves hundreds of megabytes of garbage) and its optimised, by then polymorphic,
+ * kernels, which made the later rows depend on which rows ran before them.
  */
+import { fork } from "node:child_process";
 import { readFileSync } from "node:fs";
+import { fileURLToPath } from "node:url";
 import { lusolve } from "mathjs";
 import { runAc } from "../analyses/ac";
 import { compileCircuit } from "../analyses/compile";
@@ -145,19 +151,52 @@ function demoCircuit(): ElaboratedCircuit {
   return elaborate(JSON.parse(readFileSync(url, "utf8")));
 }
 
-function main(): void {
-  const demo = demoCircuit();
-  const cases = [
-    sweepCase("rc-ladder-40 ac sweep", rcLadder(40)),
-    sweepCase("demo-microphone ac sweep", demo),
-    operatingPointCase("demo-microphone dc operating point", demo),
-  ];
-  const extra = [
-    noiseCase("demo-microphone noise 20 Hz–20 kHz", demo),
-    spreadCase(`demo-microphone spread ${SPREAD_RUNS} runs`, demo),
-    // no mathjs baseline: mathjs has no time-domain solver
-    ...largeSignalCases(demo).map((c) => ({ ...c, mathjs_median_ms: null, ratio: null })),
-  ];
+/** Every row of the benchmark by name, each computed from scratch in the process that runs it. */
+const CASES: Record<string, () => BenchCase | ExtraRow | ExtraRow[]> = {
+  ladder: () => sweepCase("rc-ladder-40 ac sweep", rcLadder(40)),
+  "demo-sweep": () => sweepCase("demo-microphone ac sweep", demoCircuit()),
+  "demo-op": () => operatingPointCase("demo-microphone dc operating point", demoCircuit()),
+  noise: () => noiseCase("demo-microphone noise 20 Hz–20 kHz", demoCircuit()),
+  spread: () => spreadCase(`demo-microphone spread ${SPREAD_RUNS} runs`, demoCircuit()),
+  // no mathjs baseline: mathjs has no time-domain solver
+  "large-signal": () => largeSignalCases(demoCircuit()).map((c) => ({ ...c, mathjs_median_ms: null, ratio: null })),
+};
+
+type ExtraRow = { name: string; nets: number; points: number; median_ms: number; note: string };
+
+/** Run one case in a fresh child process (same loader and flags) and take its result. */
+function runIsolated(name: string): Promise<BenchCase | ExtraRow | ExtraRow[]> {
+  return new Promise((resolve, reject) => {
+    const child = fork(fileURLToPath(import.meta.url), ["--case", name], {
+      stdio: ["ignore", "inherit", "inherit", "ipc"],
+    });
+    let result: BenchCase | ExtraRow | ExtraRow[] | undefined;
+    child.on("message", (m) => {
+      result = m as BenchCase | ExtraRow | ExtraRow[];
+    });
+    child.on("error", reject);
+    child.on("exit", (code) =>
+      result !== undefined ? resolve(result) : reject(new Error(`bench case ${name} exited with ${code}`)),
+    );
+  });
+}
+
+async function main(): Promise<void> {
+  const caseAt = process.argv.indexOf("--case");
+  if (caseAt >= 0) {
+    const run = CASES[process.argv[caseAt + 1]];
+    if (!run)
+      throw new Error(`Unknown bench case "${process.argv[caseAt + 1]}"; one of: ${Object.keys(CASES).join(", ")}`);
+    // NaN is not JSON: the IPC channel serialises as JSON, so non-finite numbers travel as null and print as —.
+    const json = JSON.stringify(run(), (_k, v) => (typeof v === "number" && !Number.isFinite(v) ? null : v));
+    if (process.send) process.send(JSON.parse(json));
+    else process.stdout.write(`${json}\n`);
+    return;
+  }
+  const results: Record<string, BenchCase | ExtraRow | ExtraRow[]> = {};
+  for (const name of Object.keys(CASES)) results[name] = await runIsolated(name);
+  const cases = [results.ladder, results["demo-sweep"], results["demo-op"]] as BenchCase[];
+  const extra = [results.noise, results.spread, ...(results["large-signal"] as ExtraRow[])] as ExtraRow[];
   if (process.argv.includes("--json")) {
     process.stdout.write(
       `${JSON.stringify({ cases: [...cases, ...extra] }, (_k, v) => (typeof v === "number" && !Number.isFinite(v) ? null : v))}\n`,
@@ -165,7 +204,7 @@ function main(): void {
     return;
   }
   const pad = (s: string, w: number) => s.padEnd(w);
-  const fmt = (v: number) => (Number.isFinite(v) ? v.toPrecision(4) : "—");
+  const fmt = (v: number | null) => (v !== null && Number.isFinite(v) ? v.toPrecision(4) : "—");
   console.log(
     `${pad("case", 38)}${pad("nets", 6)}${pad("points", 8)}${pad("sparse ms", 12)}${pad("dense ms", 12)}${pad("mathjs ms", 12)}${pad("ratio", 10)}best of N: sparse / dense ms`,
   );
@@ -195,4 +234,7 @@ function main(): void {
   );
 }
 
-main();
+main().catch((e) => {
+  console.error(e instanceof Error ? e.message : e);
+  process.exit(1);
+});
