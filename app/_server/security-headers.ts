@@ -15,7 +15,8 @@ export function contentSecurityPolicy(nonce: string): string {
   return [
     "default-src 'self'",
     // No 'unsafe-eval': the bench's plots are SVG traces, and Plotly's run-time code paths (WebGL trace compilers,
-    // map workers, a `new Function` fallback behind globalThis) are never reached — tests/app/security.test.ts
+    // map workers, a `new Function` fallback behind globalThis) are never reached, and zod is kept from probing for
+    // eval in the browser (components/zod-browser-config.ts) — tests/app/security.test.ts
     // draws the bench in Chromium under this policy and fails on any violation report or console error.
     `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'`,
     "style-src 'self' 'unsafe-inline'",

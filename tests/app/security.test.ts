@@ -200,13 +200,20 @@ describe("the bench under the policy, in Chromium", () => {
     // Every console error counts, not only the policy's own reports: a script refused by the policy can surface as
     // a failed chunk load or an uncaught EvalError instead.
     page.on("console", (message) => {
-      if (message.type() === "error" || /Content Security Policy|Refused to/i.test(message.text())) reported.push(`console ${message.type()}: ${message.text()}`);
+      // the browser's own favicon probe (Backplate has no /favicon.ico) is not the page's doing
+      if (message.location().url.endsWith("/favicon.ico")) return;
+      if (message.type() === "error" || /Content Security Policy|Refused to/i.test(message.text())) reported.push(`console ${message.type()}: ${message.text()} (${message.location().url})`);
     });
     page.on("pageerror", (error) => reported.push(`uncaught: ${error.message}`));
+    page.on("response", (response) => {
+      if (response.status() >= 400) reported.push(`${response.status()} ${response.url()}`);
+    });
     await page.addInitScript(() => {
       const w = window as unknown as { __violations: string[] };
       w.__violations = [];
-      document.addEventListener("securitypolicyviolation", (e) => w.__violations.push(`${e.violatedDirective} ${e.blockedURI}`));
+      document.addEventListener("securitypolicyviolation", (e) =>
+        w.__violations.push(`${e.violatedDirective} ${e.blockedURI} at ${e.sourceFile}:${e.lineNumber}:${e.columnNumber} ${e.sample}`),
+      );
     });
     await page.goto(`${baseUrl}/sign-in`);
     await page.getByLabel("E-mail").fill(DEMO.designer);
@@ -223,6 +230,13 @@ describe("the bench under the policy, in Chromium", () => {
     expect(traces).toBeGreaterThan(0);
     await page.locator(".react-flow__node").first().waitFor();
     await page.screenshot({ path: screenshotPath("security-bench-under-csp"), fullPage: false });
+    // The curves are drawn (SVG paths in Plotly's trace layer), and hovering runs Plotly's hover code too.
+    const plot = page.locator('[data-testid="plot-bode"] .js-plotly-plot');
+    await plot.scrollIntoViewIfNeeded();
+    expect(await plot.locator(".scatterlayer path.js-line").count()).toBeGreaterThan(0);
+    const box = await plot.boundingBox();
+    if (box) await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+    await plot.screenshot({ path: screenshotPath("security-bench-plot-under-csp") });
     const violations = await page.evaluate(() => (window as unknown as { __violations: string[] }).__violations);
     expect([...violations, ...reported]).toEqual([]);
   });
