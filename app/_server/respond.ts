@@ -7,15 +7,22 @@ export const DEFAULT_BODY_LIMIT_BYTES = 1_000_000;
 
 type Issue = { path: PropertyKey[]; message: string; code?: string; errors?: Issue[][] };
 
+/** zod's own wording starts so; a schema's author words theirs as advice (components/schemas). */
+const isZodDefault = (message: string) => message.startsWith("Invalid input");
+
 /**
  * The issues that name a field. A union's own issue ("Invalid input" at the union's path) names none, so the branch
  * that came closest (the fewest problems) speaks for it: `{ body: 5, anchor }` is about `body`, not the whole body.
+ * Among equally close branches, one with the schema's own words wins over zod's defaults: a due date of 5 is told
+ * "Give the due date as a day…", not 'expected ""' from the empty-string alternative.
  */
 function namedIssues(issue: Issue, prefix: PropertyKey[] = []): { path: PropertyKey[]; message: string }[] {
   const path = [...prefix, ...issue.path];
   if (issue.code === "invalid_union" && issue.errors && issue.errors.length > 0) {
-    const closest = issue.errors.reduce((best, branch) => (branch.length < best.length ? branch : best));
-    return closest.flatMap((inner) => namedIssues(inner, path));
+    const fewest = Math.min(...issue.errors.map((branch) => branch.length));
+    const closest = issue.errors.filter((branch) => branch.length === fewest);
+    const worded = closest.find((branch) => branch.every((inner) => !isZodDefault(inner.message))) ?? closest[0];
+    return worded.flatMap((inner) => namedIssues(inner, path));
   }
   return [{ path, message: issue.message }];
 }
