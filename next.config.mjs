@@ -12,6 +12,12 @@ const nextConfig = {
   poweredByHeader: false,
   // The browser tests build into their own folder so a running `npm start` keeps its build.
   distDir: process.env.BACKPLATE_DIST_DIR || ".next",
+  experimental: {
+    // proxy.ts sees every request, and Next hands a route at most this much of a body that went through it (10 MB
+    // by default), silently cut. Above the largest upload (attachments: 20 MB + the form around it), so a file over
+    // the limit reaches read-upload.ts whole enough to be refused as too large (413), never as a broken form.
+    proxyClientMaxBodySize: "24mb",
+  },
   // pg is a Node library with optional native bindings: keep it out of the server bundle.
   serverExternalPackages: ["pg"],
   // Every response, static files included; the page policy (CSP, with a nonce) is set per request in proxy.ts.

@@ -4,7 +4,7 @@ import type { ReactNode } from "react";
 import { Providers } from "@/components/providers";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { SiteHeader } from "@/components/shell/site-header";
-import { authOptions } from "./_server/auth-options";
+import { requestAuthOptions } from "./_server/auth-options";
 import { displayFont, monoFont, textFont } from "./fonts";
 import "./globals.css";
 
@@ -18,7 +18,7 @@ export const viewport: Viewport = { width: "device-width", initialScale: 1, them
 
 export default async function RootLayout({ children }: { children: ReactNode }) {
   // Reads the signed cookie only (no database), so the header's first paint knows whether someone is signed in.
-  const session = await getServerSession(authOptions);
+  const session = await getServerSession(await requestAuthOptions());
   const serverUser = session?.user ? { name: session.user.name, email: session.user.email } : null;
   return (
     <html lang="en" className={`${displayFont.variable} ${textFont.variable} ${monoFont.variable}`}>

@@ -3,6 +3,8 @@
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { SessionProvider } from "next-auth/react";
 import { type ReactNode, useState } from "react";
+// first, before any form parses: zod must not probe for eval under the page policy
+import "./zod-browser-config";
 
 /** Client-side providers for every page: the session and TanStack Query's cache. */
 export function Providers({ children }: { children: ReactNode }) {

@@ -2,6 +2,7 @@ import "server-only";
 import bcrypt from "bcryptjs";
 import { DrizzleAdapter } from "@auth/drizzle-adapter";
 import type { NextAuthOptions } from "next-auth";
+import { headers } from "next/headers";
 import type { Adapter } from "next-auth/adapters";
 import CredentialsProvider from "next-auth/providers/credentials";
 import EmailProvider from "next-auth/providers/email";
@@ -11,6 +12,7 @@ import { accounts, sessions, users, verificationTokens } from "@/db/schema";
 import { findUserByEmail, getUserById } from "@/db/users";
 import { appUrl, mailFrom, sendMail } from "./mail";
 import { signInLinkMail } from "./mail-templates/sign-in-link";
+import { servedOverHttps } from "./secure-cookies";
 import {
   clientAddress,
   RATE_LIMITED_MESSAGE,
@@ -94,3 +96,18 @@ export const authOptions: NextAuthOptions = {
     },
   },
 };
+
+/**
+ * The options for one request. next-auth's cookies are always HttpOnly and SameSite=Lax; `useSecureCookies` adds
+ * Secure (and the __Secure-/__Host- names) when the request came over HTTPS (secure-cookies.ts), including behind a
+ * TLS-ending proxy whose NEXTAUTH_URL still says http. Sign-in and every session read must use the same value, or
+ * the session cookie is written under one name and looked for under another.
+ */
+export function authOptionsFor(requestHeaders: Pick<Headers, "get">): NextAuthOptions {
+  return { ...authOptions, useSecureCookies: servedOverHttps(requestHeaders.get("x-forwarded-proto"), process.env.NEXTAUTH_URL) };
+}
+
+/** authOptionsFor() of the request being rendered or handled (server components, route handlers). */
+export async function requestAuthOptions(): Promise<NextAuthOptions> {
+  return authOptionsFor(await headers());
+}

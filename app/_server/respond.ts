@@ -5,11 +5,33 @@ import { AppError } from "@/db/errors";
 /** Largest JSON body a route accepts unless it says otherwise (a circuit file is far smaller). */
 export const DEFAULT_BODY_LIMIT_BYTES = 1_000_000;
 
-/** Turns a zod failure into field messages a form can show beside each input. */
+type Issue = { path: PropertyKey[]; message: string; code?: string; errors?: Issue[][] };
+
+/** zod's own wording starts so; a schema's author words theirs as advice (components/schemas). */
+const isZodDefault = (message: string) => message.startsWith("Invalid input");
+
+/**
+ * The issues that name a field. A union's own issue ("Invalid input" at the union's path) names none, so the branch
+ * that came closest (the fewest problems) speaks for it: `{ body: 5, anchor }` is about `body`, not the whole body.
+ * Among equally close branches, one with the schema's own words wins over zod's defaults: a due date of 5 is told
+ * "Give the due date as a day…", not 'expected ""' from the empty-string alternative.
+ */
+function namedIssues(issue: Issue, prefix: PropertyKey[] = []): { path: PropertyKey[]; message: string }[] {
+  const path = [...prefix, ...issue.path];
+  if (issue.code === "invalid_union" && issue.errors && issue.errors.length > 0) {
+    const fewest = Math.min(...issue.errors.map((branch) => branch.length));
+    const closest = issue.errors.filter((branch) => branch.length === fewest);
+    const worded = closest.find((branch) => branch.every((inner) => !isZodDefault(inner.message))) ?? closest[0];
+    return worded.flatMap((inner) => namedIssues(inner, path));
+  }
+  return [{ path, message: issue.message }];
+}
+
+/** Turns a zod failure into field messages a form can show beside each input ("_": the input as a whole). */
 export function zodFields(error: ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
-  for (const issue of error.issues) {
-    const key = issue.path.join(".") || "_";
+  for (const issue of error.issues.flatMap((i) => namedIssues(i as Issue))) {
+    const key = issue.path.map(String).join(".") || "_";
     fields[key] ??= issue.message;
   }
   return fields;
@@ -42,7 +64,9 @@ export function toAppError(error: unknown): AppError {
   if (error instanceof ZodError) {
     const fields = zodFields(error);
     const first = Object.entries(fields)[0];
-    return new AppError("invalid_input", first ? `${first[0]}: ${first[1]}` : "The input is not valid.", { fields });
+    // the field's name leads the message, so an API caller knows which one to fix
+    const label = first?.[0] === "_" ? "The request body" : first?.[0];
+    return new AppError("invalid_input", first ? `${label}: ${first[1]}` : "The input is not valid.", { fields });
   }
   if (databaseUnreachable(error)) return new AppError("unavailable", "The database is not answering. Try again in a moment.");
   console.error(error);
@@ -56,21 +80,27 @@ export function errorResponse(error: unknown): Response {
   return Response.json({ error: appError.toBody() }, { status: appError.status, headers });
 }
 
+const mb = (bytes: number) => `${Math.round(bytes / 100_000) / 10} MB`;
+
+function tooLarge(limitBytes: number): AppError {
+  return new AppError("payload_too_large", `The request body is larger than ${mb(limitBytes)}, the most this request takes. Send a smaller body.`);
+}
+
 /** Reads and validates a JSON body: size-limited, malformed JSON and wrong shapes become 4xx with a message. */
 export async function readJson<T>(request: Request, schema: ZodType<T>, limitBytes = DEFAULT_BODY_LIMIT_BYTES): Promise<T> {
   const declared = Number(request.headers.get("content-length") ?? 0);
-  if (declared > limitBytes) {
-    throw new AppError("payload_too_large", `The request body is larger than ${Math.round(limitBytes / 1000)} kB.`);
-  }
+  if (declared > limitBytes) throw tooLarge(limitBytes);
   const text = await request.text();
-  if (Buffer.byteLength(text) > limitBytes) {
-    throw new AppError("payload_too_large", `The request body is larger than ${Math.round(limitBytes / 1000)} kB.`);
-  }
+  if (Buffer.byteLength(text) > limitBytes) throw tooLarge(limitBytes);
   let data: unknown;
   try {
     data = JSON.parse(text);
-  } catch {
-    throw new AppError("bad_request", "The request body is not valid JSON.");
+  } catch (error) {
+    const why = error instanceof SyntaxError ? ` (${error.message})` : "";
+    throw new AppError(
+      "bad_request",
+      `The request body is not valid JSON${why}. Send one JSON object with Content-Type: application/json.`,
+    );
   }
   return schema.parse(data);
 }

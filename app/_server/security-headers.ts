@@ -14,9 +14,11 @@
 export function contentSecurityPolicy(nonce: string): string {
   return [
     "default-src 'self'",
-    // 'unsafe-eval': the bench's bundle (plotly.js-dist-min) compiles code at run time and Chromium reports the
-    // blocked eval as a violation; plotly.js-strict-dist-min would let this go (a follow-up, it changes the plot bundle).
-    `script-src 'self' 'nonce-${nonce}' 'strict-dynamic' 'unsafe-eval'`,
+    // No 'unsafe-eval': the bench's plots are SVG traces, and Plotly's run-time code paths (WebGL trace compilers,
+    // map workers, a `new Function` fallback behind globalThis) are never reached, and zod is kept from probing for
+    // eval in the browser (components/zod-browser-config.ts) — tests/app/security.test.ts
+    // draws the bench in Chromium under this policy and fails on any violation report or console error.
+    `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'`,
     "style-src 'self' 'unsafe-inline'",
     "img-src 'self' data: blob:",
     "font-src 'self'",

@@ -4,13 +4,13 @@ import { type Action, can } from "@/components/auth/roles";
 import { AppError } from "@/db/errors";
 import { getMembership, type WorkspaceMembership } from "@/db/memberships";
 import { getUserById, type UserRow } from "@/db/users";
-import { authOptions } from "./auth-options";
+import { requestAuthOptions } from "./auth-options";
 
 export type SessionUser = Pick<UserRow, "id" | "email" | "name">;
 
 /** The signed-in person, or null. Reads the signed session cookie, then the user row (so a deleted user is out). */
 export async function getSessionUser(): Promise<SessionUser | null> {
-  const session = await getServerSession(authOptions);
+  const session = await getServerSession(await requestAuthOptions());
   const id = (session?.user as { id?: string } | undefined)?.id;
   if (!id) return null;
   const user = await getUserById(id);

@@ -44,6 +44,14 @@ export const attachmentFieldsSchema = z.object({
 });
 export type AttachmentFields = z.output<typeof attachmentFieldsSchema>;
 
+/** The list's query: `?reviewId=` narrows it to one review's attachments (omitted or empty: all of the design's). */
+export const attachmentListQuerySchema = z.object({
+  reviewId: z
+    .union([z.literal(""), z.uuid({ error: "reviewId must be the id of a review of this design." })])
+    .optional()
+    .transform((id) => id || undefined),
+});
+
 /** Owners and designers may delete any attachment of a design; whoever uploaded one may delete their own. */
 export function mayDeleteAttachment(role: Role, isUploader: boolean): boolean {
   return can(role, "design.edit") || (isUploader && can(role, "review.remark"));

@@ -46,6 +46,9 @@ export const createDesignSchema = z.object({
 });
 export type CreateDesignInput = z.input<typeof createDesignSchema>;
 
+/** The import's query string: `?title=` (omitted: the file's own title, else "Imported circuit"). */
+export const importDesignQuerySchema = z.object({ title: designTitleSchema.optional() });
+
 export const renameDesignSchema = z.object({ title: designTitleSchema });
 export type RenameDesignInput = z.input<typeof renameDesignSchema>;
 

@@ -1,5 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { DEMO_WORKSPACE } from "../../db/demo-people";
+import electretJfet from "../../sim/examples/electret-jfet.json";
+import triodeFollower from "../../sim/examples/triode-emitter-follower.json";
 import { type DemoRole, demoCircuit, foreignWorkspace, Pool, signInAll, withParameter, workspaceIdOf } from "./design-fixtures";
 import { type HttpSession, originHeader } from "./http-session";
 
@@ -194,6 +196,35 @@ describe("bench links over HTTP", () => {
     const past = await as.designer.fetch(`${d(f)}/bench-links`, { method: "POST", body: { expiresAt: "2020-01-01T00:00:00Z" } });
     expect(past.status).toBe(422);
     expect((await fetch(`${baseUrl}/b/${"A".repeat(43)}`)).status).toBe(404);
+  });
+
+  it("shows the bench's caution on a link to a circuit with a valve or polarisation supply, and none on a low-voltage one", async () => {
+    // The banner's text between its opening tag and the next block; empty when the page has none.
+    const caution = (html: string) => {
+      const at = html.indexOf('data-testid="caution-banner"');
+      return at < 0 ? "" : html.slice(at, html.indexOf("</div>", at)).replace(/<[^>]+>/g, "").replace(/&#x27;|&#39;/g, "'");
+    };
+    const pageOf = async (title: string, circuit: unknown) => {
+      const created = await as.owner.fetch(`/api/workspaces/${ws}/designs`, { method: "POST", body: { title, circuit } });
+      expect(created.status, await created.clone().text()).toBe(201);
+      const { design } = await created.json();
+      const made = await as.owner.fetch(`/api/workspaces/${ws}/designs/${design.id}/bench-links`, { method: "POST", body: { isPublic: true } });
+      const page = await anonymous.fetch((await made.json()).path);
+      expect(page.status).toBe(200);
+      return page.text();
+    };
+    // The circuits' own values: the follower's VHT is a 150 V valve supply to triode V1; the demo microphone's VPOL1
+    // polarises the capsule at 60 V; the electret's largest source is a few volts. The thresholds are the bench's
+    // (60 V DC extra-low-voltage limit, IEC 61140 band I from memory; supplies from 48 V, phantom power IEC 61938).
+    const valve = caution(await pageOf("Link caution: valve", triodeFollower));
+    expect(valve).toMatch(/Caution — lethal voltages\./);
+    expect(valve).toMatch(/V1 is a valve: its supply is lethal/);
+    expect(valve).toMatch(/VHT supplies 150 V/);
+    const polarised = caution(await pageOf("Link caution: polarisation", demoCircuit()));
+    expect(polarised).toMatch(/VPOL1 supplies 60 V/);
+    const electretPage = await pageOf("Link caution: electret", electretJfet);
+    expect(electretPage).toContain("Link caution: electret");
+    expect(caution(electretPage)).toBe("");
   });
 
   it("a members-only link sends a signed-out person to sign in, and opens for a member", async () => {

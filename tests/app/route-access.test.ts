@@ -6,42 +6,16 @@
  * the table fails this test. Expected roles: components/auth/roles.ts's table as the glossary states it (a viewer
  * reads only) — the product's own rule, checked against the server's answers.
  */
-import { readdirSync, readFileSync } from "node:fs";
-import path from "node:path";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { DEMO_WORKSPACE } from "../../db/demo-people";
 import { demoCircuit, Pool, signInAll, workspaceIdOf } from "./design-fixtures";
 import { type HttpSession, originHeader } from "./http-session";
+import { type Method, routesOnDisk } from "./routes-on-disk";
 import { signUp } from "./people";
 
 const baseUrl = inject("baseUrl");
 const pool = new Pool({ connectionString: inject("databaseUrl") });
 afterAll(() => pool.end());
-
-const APP_DIR = path.resolve(import.meta.dirname, "../../app");
-const METHODS = ["GET", "POST", "PUT", "PATCH", "DELETE"] as const;
-type Method = (typeof METHODS)[number];
-
-/** app/**\/route.ts → "/api/…/[param]" → its exported HTTP methods, read from the source. */
-function routesOnDisk(): Map<string, Method[]> {
-  const found = new Map<string, Method[]>();
-  const walk = (dir: string) => {
-    for (const entry of readdirSync(dir, { withFileTypes: true })) {
-      const full = path.join(dir, entry.name);
-      if (entry.isDirectory()) walk(full);
-      else if (entry.name === "route.ts") {
-        const source = readFileSync(full, "utf8");
-        const methods = METHODS.filter((m) =>
-          new RegExp(`export\\s+(const|async\\s+function|function)\\s+${m}\\b|\\bas\\s+${m}\\b`).test(source),
-        );
-        const route = `/${path.relative(APP_DIR, dir).split(path.sep).filter((s) => !/^\(.*\)$/.test(s)).join("/")}`;
-        found.set(route, methods);
-      }
-    }
-  };
-  walk(APP_DIR);
-  return found;
-}
 
 interface Ids {
   ws: string;

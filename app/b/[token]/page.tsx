@@ -1,6 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
+import { CautionBanner } from "@/components/bench/caution-banner";
+import { openDocument } from "@/components/bench/document/document";
 import { RevisionReadout } from "@/components/designs/revision-readout";
 import { runSavedRevision } from "@/app/_server/revision-runs";
 import { openBenchLink } from "../open-bench-link";
@@ -18,6 +20,9 @@ export default async function BenchLinkPage({ params }: { params: Promise<{ toke
   const { link, revision } = opening;
   const view = link.view;
   const run = runSavedRevision(revision.id, revision.circuit, view.variant);
+  // The same caution the bench shows, from the same rule (components/bench/document/hazards.ts): someone opening a
+  // shared link is as likely to build the circuit as its designer.
+  const { circuit } = openDocument(revision.circuit);
   return (
     <div className="mx-auto max-w-5xl space-y-6 px-4 py-8 sm:px-6">
       <header className="space-y-2 border-b border-rule pb-4">
@@ -40,6 +45,7 @@ export default async function BenchLinkPage({ params }: { params: Promise<{ toke
           {link.expiresAt ? <li className="rounded-full border border-rule px-2.5 py-0.5 text-ink-soft">Expires {link.expiresAt.toISOString().slice(0, 10)}</li> : null}
         </ul>
       </header>
+      <CautionBanner circuit={circuit} opNets={run.ok ? (run.document.op?.nets ?? null) : null} />
       <RevisionReadout run={run} circuit={revision.circuit} view={view} />
       <p className="text-xs text-ink-soft">
         Computed on the server by Backplate's engine{run.ok ? ` in ${Math.round(run.ms)} ms` : ""}. <Link href="/" className="underline">About Backplate</Link>

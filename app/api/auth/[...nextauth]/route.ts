@@ -1,6 +1,12 @@
 import NextAuth from "next-auth";
-import { authOptions } from "@/app/_server/auth-options";
+import type { NextRequest } from "next/server";
+import { authOptionsFor } from "@/app/_server/auth-options";
 
-const handler = NextAuth(authOptions);
+type Context = { params: Promise<{ nextauth: string[] }> };
+
+/** next-auth's endpoints, with the options of this request (Secure cookies when it came over HTTPS). */
+async function handler(request: NextRequest, context: Context) {
+  return NextAuth(request, context, authOptionsFor(request.headers));
+}
 
 export { handler as GET, handler as POST };

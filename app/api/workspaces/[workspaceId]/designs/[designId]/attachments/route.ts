@@ -2,7 +2,7 @@ import { MAX_ATTACHMENT_BYTES, sniffAttachmentType } from "@/app/_server/attachm
 import { readUpload } from "@/app/_server/read-upload";
 import { route } from "@/app/_server/respond";
 import { storageKey, storeThenRecord } from "@/app/_server/store-then-record";
-import { attachmentFieldsSchema } from "@/components/schemas/attachment";
+import { attachmentFieldsSchema, attachmentListQuerySchema } from "@/components/schemas/attachment";
 import { assertReviewOfDesign, insertAttachment, listAttachments } from "@/db/attachments";
 import { getDesign } from "@/db/designs";
 import { access, type Params } from "../../_access";
@@ -12,7 +12,10 @@ export const dynamic = "force-dynamic";
 export const GET = route<Params<"designId">>(async (request, { params }) => {
   const { workspaceId, designId } = await params;
   await access(workspaceId, "design.read");
-  const reviewId = new URL(request.url).searchParams.get("reviewId") ?? undefined;
+  // checked as an id first: a malformed one would otherwise reach PostgreSQL as a uuid it cannot read
+  const { reviewId } = attachmentListQuerySchema.parse(Object.fromEntries(new URL(request.url).searchParams));
+  // an unknown or another workspace's design is 404, never an empty list that looks like a real one
+  await getDesign(workspaceId, designId);
   const rows = await listAttachments(workspaceId, designId, reviewId);
   return Response.json({ attachments: rows.map(({ storageKey: _key, ...rest }) => rest) });
 });

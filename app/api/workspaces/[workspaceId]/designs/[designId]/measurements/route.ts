@@ -2,6 +2,7 @@ import { uploadMeasurement } from "@/app/_server/measurement-upload";
 import { readUpload } from "@/app/_server/read-upload";
 import { route } from "@/app/_server/respond";
 import { MAX_MEASUREMENT_BYTES } from "@/components/measurements/read-table";
+import { getDesign } from "@/db/designs";
 import { listMeasurements } from "@/db/measurements";
 import { access, type Params } from "../../_access";
 
@@ -11,6 +12,8 @@ export const dynamic = "force-dynamic";
 export const GET = route<Params<"designId">>(async (_request, { params }) => {
   const { workspaceId, designId } = await params;
   await access(workspaceId, "design.read");
+  // an unknown or another workspace's design is 404, never an empty list that looks like a real one
+  await getDesign(workspaceId, designId);
   return Response.json({ measurements: await listMeasurements(workspaceId, designId) });
 });
 

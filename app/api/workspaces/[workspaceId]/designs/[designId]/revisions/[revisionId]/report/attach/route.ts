@@ -6,6 +6,7 @@ import { storageKey, storeThenRecord } from "@/app/_server/store-then-record";
 import { attachReportSchema } from "@/components/schemas/report";
 import { AppError } from "@/db/errors";
 import { assertReviewOfDesign, insertAttachment } from "@/db/attachments";
+import { getRevision } from "@/db/revisions";
 import { signOffRecord } from "@/db/sign-off";
 import { access, type Params } from "../../../../../_access";
 
@@ -16,6 +17,8 @@ export const POST = route<Params<"designId" | "revisionId">>(async (request, { p
   const { workspaceId, designId, revisionId } = await params;
   const { user, membership } = await access(workspaceId, "review.remark");
   const input = await readJson(request, attachReportSchema);
+  // The path first: an unknown or foreign design or revision is 404, as everywhere, before the body's review is judged.
+  await getRevision(workspaceId, designId, revisionId);
   await assertReviewOfDesign(designId, input.reviewId);
   const { reviews } = await signOffRecord(workspaceId, designId, revisionId);
   if (!reviews.some((r) => r.id === input.reviewId)) {
