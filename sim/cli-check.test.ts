@@ -37,7 +37,10 @@ function fileWith(targets: unknown[]): string {
 }
 
 beforeAll(async () => {
-  const [base, pad] = await Promise.all([cli("sim/examples/demo-microphone.json"), cli("sim/examples/demo-microphone.json", "--variant", "pad")]);
+  const [base, pad] = await Promise.all([
+    cli("sim/examples/demo-microphone.json"),
+    cli("sim/examples/demo-microphone.json", "--variant", "pad"),
+  ]);
   figures = base.document.figures as Record<string, number>;
   padFigures = pad.document.figures as Record<string, number>;
   expect(base.document.checks).toBeUndefined();

@@ -52,7 +52,12 @@ export const mutation: fc.Arbitrary<Mutation> = fc.oneof(
   fc.record({ op: fc.constant("drop" as const), at: index }),
   fc.record({ op: fc.constant("duplicate" as const), at: index }),
   fc.record({ op: fc.constant("swapNets" as const), at: index, other: index }),
-  fc.record({ op: fc.constant("setNet" as const), at: index, pin: fc.nat({ max: 3 }), net: fc.oneof(anyNet, strangeValue) }),
+  fc.record({
+    op: fc.constant("setNet" as const),
+    at: index,
+    pin: fc.nat({ max: 3 }),
+    net: fc.oneof(anyNet, strangeValue),
+  }),
   fc.record({ op: fc.constant("dropPin" as const), at: index, pin: fc.nat({ max: 3 }) }),
   fc.record({
     op: fc.constant("setValue" as const),
@@ -78,7 +83,17 @@ export const mutation: fc.Arbitrary<Mutation> = fc.oneof(
   }),
   fc.record({
     op: fc.constant("setTop" as const),
-    field: fc.constantFrom("format", "version", "parts", "output", "parameters", "variants", "analyses", "targets", "zzz"),
+    field: fc.constantFrom(
+      "format",
+      "version",
+      "parts",
+      "output",
+      "parameters",
+      "variants",
+      "analyses",
+      "targets",
+      "zzz",
+    ),
     value: strangeValue,
   }),
   fc.record({ op: fc.constant("deep" as const), at: index, depth: fc.integer({ min: 10, max: 2000 }) }),
@@ -91,7 +106,9 @@ export const mutation: fc.Arbitrary<Mutation> = fc.oneof(
 );
 
 function record(value: Json): Record<string, Json> | undefined {
-  return value !== null && typeof value === "object" && !Array.isArray(value) ? (value as Record<string, Json>) : undefined;
+  return value !== null && typeof value === "object" && !Array.isArray(value)
+    ? (value as Record<string, Json>)
+    : undefined;
 }
 
 function pick<T>(items: T[], at: number): T | undefined {
@@ -171,11 +188,20 @@ export function applyMutation(file: CircuitFile, m: Mutation): void {
     case "manyParts":
       // a ladder of resistors from the first net of the file to ground: many nets, one solve
       for (let i = 0; i < m.count; i += 1) {
-        parts.push({ id: `RX${i}`, kind: "resistor", pins: { a: `x${i}`, b: i ? `x${i - 1}` : "0" }, values: { resistance: "1k" } });
+        parts.push({
+          id: `RX${i}`,
+          kind: "resistor",
+          pins: { a: `x${i}`, b: i ? `x${i - 1}` : "0" },
+          values: { resistance: "1k" },
+        });
       }
       return;
     case "hugeArray":
-      setPath(file, m.field, Array.from({ length: m.count }, (_, i) => (m.field === "parts" ? { id: `P${i}` } : i)));
+      setPath(
+        file,
+        m.field,
+        Array.from({ length: m.count }, (_, i) => (m.field === "parts" ? { id: `P${i}` } : i)),
+      );
       return;
   }
 }
@@ -185,15 +211,15 @@ export type Example = { name: string; file: CircuitFile };
 /** One of `examples` (parsed circuit files) with one to four edits applied to a copy. */
 export const mutatedFile = (examples: Example[]): fc.Arbitrary<Example & { mutations: Mutation[] }> =>
   fc
-  .record({
-    example: fc.constantFrom(...examples),
-    mutations: fc.array(mutation, { minLength: 1, maxLength: 4 }),
-  })
-  .map(({ example, mutations }) => {
-    const file = structuredClone(example.file);
-    for (const m of mutations) applyMutation(file, m);
-    return { name: example.name, mutations, file };
-  });
+    .record({
+      example: fc.constantFrom(...examples),
+      mutations: fc.array(mutation, { minLength: 1, maxLength: 4 }),
+    })
+    .map(({ example, mutations }) => {
+      const file = structuredClone(example.file);
+      for (const m of mutations) applyMutation(file, m);
+      return { name: example.name, mutations, file };
+    });
 
 /** Any JSON-ish value at all, for the parser's outermost checks. */
 export const anyDocument: fc.Arbitrary<Json> = fc.oneof(fc.jsonValue({ maxDepth: 4 }), fc.anything({ maxDepth: 3 }));

@@ -28,4 +28,11 @@ export { isSimError, SimError, type SimErrorCode, type SimErrorJson } from "./er
 export type * from "./results";
 export { runCircuit } from "./run";
 export { type RunOptions, runWith, type Simulate, withFiniteNumbers } from "./runner";
-export { allPass, BASE_VARIANT, checkTarget, checkTargets, type FiguresByVariant, variantsNeeded } from "./analyses/targets";
+export {
+  allPass,
+  BASE_VARIANT,
+  checkTarget,
+  checkTargets,
+  type FiguresByVariant,
+  variantsNeeded,
+} from "./analyses/targets";

@@ -92,7 +92,10 @@ export interface RippleResult {
 /** Which device leaves its region first at max_spl_db, and how. */
 export interface LimitedBy {
   part: string;
+  /** the contract's words: "cut-off", "saturation", "gate conduction" or "grid conduction" */
   reason: string;
+  /** the boundary in the device's own terms where the contract's word is ambiguous for it (a JFET's ohmic region) */
+  detail?: string;
 }
 
 /** What `simulate` returns for one elaborated circuit. Keys of analyses that did not run are absent. */

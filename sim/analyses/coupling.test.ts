@@ -64,7 +64,12 @@ describe("capsule", () => {
       [
         part("VP", "vsource", { p: "pol", n: "0" }, { dc: polarisation }),
         part("RB", "resistor", { a: "pol", b: "dia" }, { resistance: 1e9 }),
-        part("MIC", "capsule", { diaphragm: "dia", backplate: "0" }, { capacitance: 50e-12, strain_per_pa: 2e-4, ...extra }),
+        part(
+          "MIC",
+          "capsule",
+          { diaphragm: "dia", backplate: "0" },
+          { capacitance: 50e-12, strain_per_pa: 2e-4, ...extra },
+        ),
       ],
       { plus: "dia" },
     );

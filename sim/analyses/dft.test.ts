@@ -30,7 +30,9 @@ describe("DFT over whole periods", () => {
   it("symmetric hard clipping has odd harmonics only", () => {
     // Half-wave symmetry x(t + T/2) = −x(t) cancels every even Fourier coefficient (Fourier-series property).
     const n = 256;
-    const record = Array.from({ length: n + 1 }, (_, i) => Math.max(-0.5, Math.min(0.5, Math.sin((2 * Math.PI * i) / n))));
+    const record = Array.from({ length: n + 1 }, (_, i) =>
+      Math.max(-0.5, Math.min(0.5, Math.sin((2 * Math.PI * i) / n))),
+    );
     const d = distortionOf(record, 1);
     const even = [0, 2, 4, 6, 8].map((k) => d.harmonics_db[k]);
     const odd = [1, 3, 5].map((k) => d.harmonics_db[k]);

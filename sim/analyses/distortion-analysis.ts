@@ -13,7 +13,12 @@ import { findMaxSpl } from "./max-spl";
 import type { OperatingPoint } from "./op";
 import type { RunControl } from "./transient";
 
-function setupFor(compiled: CompiledCircuit, op: OperatingPoint, frequency: number, mode: "spl" | "level"): DistortionSetup {
+function setupFor(
+  compiled: CompiledCircuit,
+  op: OperatingPoint,
+  frequency: number,
+  mode: "spl" | "level",
+): DistortionSetup {
   const inputs = new Set(inputSources(compiled.circuit.parts).map((p) => p.id));
   const drivers = compiled.devices.filter((d) => (mode === "spl" ? d.part.kind === "capsule" : inputs.has(d.part.id)));
   // phasors of a sine: sources read their own ac∠phase, capsules 1 Pa; scaled per level
@@ -31,9 +36,13 @@ export function runDistortion(
   const hasCapsule = parts.some((p) => p.kind === "capsule");
   const mode = request.splDb ? "spl" : "level";
   if (mode === "spl" && !hasCapsule) {
-    throw new SimError("invalid_analysis", 'analyses.distortion.spl_db: this circuit has no capsule to drive; use "levels" to drive its input sources', {
-      field: "analyses.distortion.spl_db",
-    });
+    throw new SimError(
+      "invalid_analysis",
+      'analyses.distortion.spl_db: this circuit has no capsule to drive; use "levels" to drive its input sources',
+      {
+        field: "analyses.distortion.spl_db",
+      },
+    );
   }
   if (mode === "level" && inputSources(parts).length === 0) {
     throw new SimError(
@@ -47,7 +56,8 @@ export function runDistortion(
   const points: DistortionPoint[] = amounts.map((amount, i) => {
     const r = distortionAtLevel(setup, amount, {
       shouldStop: control.shouldStop,
-      onProgress: control.onProgress && ((f) => control.onProgress!((hasCapsule ? 0.5 : 1) * ((i + f) / amounts.length))),
+      onProgress:
+        control.onProgress && ((f) => control.onProgress!((hasCapsule ? 0.5 : 1) * ((i + f) / amounts.length))),
     });
     const point: DistortionPoint = {
       ...(mode === "spl" ? { spl_db: amount } : { level: amount }),
@@ -57,7 +67,9 @@ export function runDistortion(
     };
     const warnings = mode === "spl" ? capsuleGapWarnings(parts, splAmplitudePa(amount), request.frequency) : [];
     if (!r.settled) {
-      warnings.push({ message: `distortion at ${amount}${mode === "spl" ? " dB SPL" : ""}: the waveform did not become periodic within ${r.periods} periods; the harmonics are those of the last period` });
+      warnings.push({
+        message: `distortion at ${amount}${mode === "spl" ? " dB SPL" : ""}: the waveform did not become periodic within ${r.periods} periods; the harmonics are those of the last period`,
+      });
     }
     if (warnings.length > 0) point.warnings = warnings;
     return point;

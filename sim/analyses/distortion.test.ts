@@ -74,16 +74,20 @@ describe("distortion", () => {
     expect(max).toBeGreaterThan(40);
     expect(onePercent).toBeGreaterThan(max);
     expect(r.figures.max_spl_limited_by).toEqual({ part: "J1", reason: "cut-off" });
-    const check = simulate({ ...c, analyses: { distortion: { frequency: 1000, splDb: [max - 0.2, max + 0.2], temperature: T } } });
+    const check = simulate({
+      ...c,
+      analyses: { distortion: { frequency: 1000, splDb: [max - 0.2, max + 0.2], temperature: T } },
+    });
     expect(check.distortion![0].thd_percent).toBeLessThan(0.5);
     expect(check.distortion![1].thd_percent).toBeGreaterThan(0.5);
   });
 
-  it("a common-source JFET short of drain headroom is limited by the ohmic (triode) region, not called saturation", () => {
+  it("a common-source JFET short of drain headroom is limited by the contract's saturation, detailed as the ohmic (triode) region", () => {
     // Self-bias by hand (Shockley's equation, reference README): Id = 1 mA·(2 − 470·Id)² gives Id ≈ 1.58 mA,
     // Vov ≈ 1.26 V; with RD 5.2 kΩ, Vds ≈ 12 − 1.58 mA·5.67 kΩ ≈ 3.0 V, only ≈ 1.7 V above Vov = Vgs − Vp, while
     // cut-off is ≈ 1.26 V·(1 + gm·RS) ≈ 2.8 V of gate swing away: the drain swing (gain ≈ 6) reaches Vds = Vov
-    // first. In the trade that is the ohmic (triode) region; a JFET's "saturation" is where it normally works.
+    // first. The contract names that "saturation" (out of headroom); in the JFET trade it is the ohmic (triode)
+    // region, because a JFET's own "saturation" is where it normally works — hence the detail.
     const c = circuit(
       [
         part("VPOL", "vsource", { p: "pol", n: "0" }, { dc: 60 }),
@@ -101,6 +105,10 @@ describe("distortion", () => {
     );
     const r = simulate(c);
     expect(r.figures.max_spl_db).not.toBeNull();
-    expect(r.figures.max_spl_limited_by).toEqual({ part: "J1", reason: "ohmic (triode) region" });
+    expect(r.figures.max_spl_limited_by).toEqual({
+      part: "J1",
+      reason: "saturation",
+      detail: "ohmic (triode) region: Vds below Vgs − Vp",
+    });
   });
 });

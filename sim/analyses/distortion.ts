@@ -53,9 +53,7 @@ export function distortionAtLevel(setup: DistortionSetup, amount: number, contro
   const { compiled, op, frequency } = setup;
   const parts = compiled.circuit.parts;
   const drive = new Drive(
-    setup.mode === "spl"
-      ? { shape: "sine", frequency, splDb: amount }
-      : { shape: "sine", frequency, level: amount },
+    setup.mode === "spl" ? { shape: "sine", frequency, splDb: amount } : { shape: "sine", frequency, level: amount },
     parts,
   );
   const amplitude = setup.mode === "spl" ? drive.pressureAmplitude : amount;
@@ -91,11 +89,15 @@ export function distortionAtLevel(setup: DistortionSetup, amount: number, contro
   };
   track(run.x);
   while (periods < DISTORTION_MAX_PERIODS) {
-    run.advance((periods + 1) * period, (_t, x, landing) => {
-      if (!landing) return;
-      record[filled++] = output(x);
-      track(x);
-    }, control);
+    run.advance(
+      (periods + 1) * period,
+      (_t, x, landing) => {
+        if (!landing) return;
+        record[filled++] = output(x);
+        track(x);
+      },
+      control,
+    );
     periods++;
     figures = distortionOf(record, 1);
     limit = nearest(minima);
@@ -122,7 +124,11 @@ function nearest(minima: Map<Device, RegionMargin>): LevelResult["limit"] {
 }
 
 /** Warnings for a drive that closes a capsule's gap by more than CAPSULE_GAP_WARNING_FRACTION (linear model). */
-export function capsuleGapWarnings(parts: readonly ElaboratedPart[], peakPressurePa: number, frequency: number): SimWarning[] {
+export function capsuleGapWarnings(
+  parts: readonly ElaboratedPart[],
+  peakPressurePa: number,
+  frequency: number,
+): SimWarning[] {
   const out: SimWarning[] = [];
   for (const p of parts) {
     if (p.kind !== "capsule") continue;

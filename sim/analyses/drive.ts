@@ -91,9 +91,7 @@ export class Drive {
 
   /** the devices the drive reaches, for its phasor solution */
   drivers(compiled: CompiledCircuit): Device[] {
-    return compiled.devices.filter((d) =>
-      this.acoustic ? d.part.kind === "capsule" : this.inputs.has(d.part.id),
-    );
+    return compiled.devices.filter((d) => (this.acoustic ? d.part.kind === "capsule" : this.inputs.has(d.part.id)));
   }
 }
 

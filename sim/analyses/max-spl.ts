@@ -68,7 +68,11 @@ export function findMaxSpl(setup: DistortionSetup, control: RunControl = {}): Ma
         first = r;
       }
     }
-    if (first?.limit) limitedBy = { part: first.limit.part, reason: first.limit.margin.reason };
+    if (first?.limit) {
+      const { reason, detail } = first.limit.margin;
+      limitedBy =
+        detail === undefined ? { part: first.limit.part, reason } : { part: first.limit.part, reason, detail };
+    }
   }
   return { max_spl_db: half, max_spl_1pct_db: one, max_spl_limited_by: limitedBy, evaluations: cache.size };
 }

@@ -43,7 +43,9 @@ export function createWorkspaceFlags(kinds: UnknownKind[]): Uint8Array {
   return Uint8Array.from(kinds.map((k) => (k === "voltage" ? 1 : 0)));
 }
 
-export type NewtonOutcome = { converged: true; iterations: number } | { converged: false; iterations: number; worst: number };
+export type NewtonOutcome =
+  | { converged: true; iterations: number }
+  | { converged: false; iterations: number; worst: number };
 
 /**
  * Iterate from `x` (updated in place). gmin (S) is added from every node to ground. Throws SingularMatrixError

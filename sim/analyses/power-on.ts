@@ -11,7 +11,11 @@ export const POWER_ON_SETTLE_FRACTION = 0.01;
  * @param polarisation per capsule, V, one value per time
  * @param final per capsule, V
  */
-export function settleTime(time: readonly number[], polarisation: readonly (readonly number[])[], final: readonly number[]): number | null {
+export function settleTime(
+  time: readonly number[],
+  polarisation: readonly (readonly number[])[],
+  final: readonly number[],
+): number | null {
   if (polarisation.length === 0 || time.length === 0) return null;
   let settled = 0;
   for (let c = 0; c < polarisation.length; c++) {

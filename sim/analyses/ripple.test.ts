@@ -38,7 +38,10 @@ describe("supply ripple", () => {
 
   it("asks for a supply-role source when there is none", () => {
     const c = circuit(
-      [part("V1", "vsource", { p: "a", n: "0" }, { dc: 1, ac: 1 }), part("R1", "resistor", { a: "a", b: "0" }, { resistance: 1 })],
+      [
+        part("V1", "vsource", { p: "a", n: "0" }, { dc: 1, ac: 1 }),
+        part("R1", "resistor", { a: "a", b: "0" }, { resistance: 1 }),
+      ],
       { plus: "a" },
       { ripple: { frequencies: { kind: "list", frequencies: [1000] }, temperature: DEFAULT_TEMPERATURE_K } },
     );

@@ -25,9 +25,13 @@ export function runRipple(
 ): { result: RippleResult; rejection1kHzDb: number | null } {
   const supplies = supplySources(compiled.circuit.parts);
   if (supplies.length === 0) {
-    throw new SimError("invalid_analysis", 'analyses.ripple: no source has "role": "supply"; mark the supply source(s) to see their rejection', {
-      field: "analyses.ripple",
-    });
+    throw new SimError(
+      "invalid_analysis",
+      'analyses.ripple: no source has "role": "supply"; mark the supply source(s) to see their rejection',
+      {
+        field: "analyses.ripple",
+      },
+    );
   }
   const ids = new Set(supplies.map((p) => p.id));
   const driven = compiled.devices.filter((d) => ids.has(d.part.id));

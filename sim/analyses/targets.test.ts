@@ -8,7 +8,12 @@ import { allPass, BASE_VARIANT, checkTarget, checkTargets, variantsNeeded } from
 
 describe("checkTargets (contract: Targets)", () => {
   const results = {
-    [BASE_VARIANT]: { self_noise_dba_spl: 11.2, low_corner_hz: 24.5, sensitivity_db_re_1v_per_pa: null, polarity: "inverting" as const },
+    [BASE_VARIANT]: {
+      self_noise_dba_spl: 11.2,
+      low_corner_hz: 24.5,
+      sensitivity_db_re_1v_per_pa: null,
+      polarity: "inverting" as const,
+    },
     pad: { sensitivity_db_re_1v_per_pa: -38.1, low_corner_hz: 18 },
   };
 
@@ -51,10 +56,13 @@ describe("checkTargets (contract: Targets)", () => {
   it("passes with no targets and lists the variants a set of targets needs, base first", () => {
     expect(checkTargets({}, results)).toEqual([]);
     expect(allPass([])).toBe(true);
-    expect(variantsNeeded([{ figure: "a", variant: "pad" }, { figure: "b" }, { figure: "c", variant: "hot" }, { figure: "d", variant: "pad" }])).toEqual([
-      BASE_VARIANT,
-      "hot",
-      "pad",
-    ]);
+    expect(
+      variantsNeeded([
+        { figure: "a", variant: "pad" },
+        { figure: "b" },
+        { figure: "c", variant: "hot" },
+        { figure: "d", variant: "pad" },
+      ]),
+    ).toEqual([BASE_VARIANT, "hot", "pad"]);
   });
 });

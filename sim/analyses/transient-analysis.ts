@@ -34,9 +34,13 @@ export function runTransient(
   const warnings: SimWarning[] = [];
   if (drive && request.drive?.splDb !== undefined) {
     if (!parts.some((p) => p.kind === "capsule")) {
-      throw new SimError("invalid_analysis", 'analyses.transient.drive.spl_db: this circuit has no capsule to drive; use "level" to drive its input sources', {
-        field: "analyses.transient.drive.spl_db",
-      });
+      throw new SimError(
+        "invalid_analysis",
+        'analyses.transient.drive.spl_db: this circuit has no capsule to drive; use "level" to drive its input sources',
+        {
+          field: "analyses.transient.drive.spl_db",
+        },
+      );
     }
     warnings.push(...capsuleGapWarnings(parts, drive.pressureAmplitude, drive.frequency));
   }

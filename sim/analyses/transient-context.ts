@@ -32,7 +32,14 @@ export class TransientContext extends NewtonContext implements TransientStampCon
   readonly dq1: Float64Array;
   readonly dq2: Float64Array;
 
-  constructor(system: RealSystem, x: Float64Array, thermalVoltage: number, operatingPoint: Float64Array, states: number, drive: Drive | null) {
+  constructor(
+    system: RealSystem,
+    x: Float64Array,
+    thermalVoltage: number,
+    operatingPoint: Float64Array,
+    states: number,
+    drive: Drive | null,
+  ) {
     super(system, x, thermalVoltage);
     this.operatingPoint = operatingPoint;
     this.drive = drive;

@@ -20,13 +20,18 @@ describe("transient stamps of the energy-storing kinds", () => {
     const circ = circuit(
       [
         { ...part("VIN", "vsource", { p: "in", n: "0" }, { dc: 0, ac: 1 }), role: "input" } as ElaboratedPart,
-        part("T1", "transformer", { p1: "in", p2: "0", s1: "out", s2: "0" }, {
-          ratio: n,
-          primary_inductance: 1e3,
-          // 1 mΩ: a DC path that is not a voltage-source loop; its drop (≈ 0.2 µV) is far below the tolerance
-          primary_resistance: 1e-3,
-          secondary_resistance: rs,
-        }),
+        part(
+          "T1",
+          "transformer",
+          { p1: "in", p2: "0", s1: "out", s2: "0" },
+          {
+            ratio: n,
+            primary_inductance: 1e3,
+            // 1 mΩ: a DC path that is not a voltage-source loop; its drop (≈ 0.2 µV) is far below the tolerance
+            primary_resistance: 1e-3,
+            secondary_resistance: rs,
+          },
+        ),
         part("DESK", "load", { p: "out", n: "0" }, { resistance: r, capacitance: c }),
       ],
       { plus: "out" },

@@ -55,7 +55,11 @@ export function stampTransientSystem(w: TransientWorkspace): void {
  * Iterate from x (updated in place) at the context's time and integration coefficients. Returns the number of
  * iterations, or −1 when it did not converge (or a Jacobian was singular): the caller cuts the step.
  */
-export function solveTimePoint(w: TransientWorkspace, x: Float64Array, maxIterations = TRANSIENT_NEWTON_MAX_ITERATIONS): number {
+export function solveTimePoint(
+  w: TransientWorkspace,
+  x: Float64Array,
+  maxIterations = TRANSIENT_NEWTON_MAX_ITERATIONS,
+): number {
   const { system, context: ctx, next, isVoltage } = w;
   const n = x.length;
   for (const d of w.devices) d.startNewton(x);
@@ -72,7 +76,9 @@ export function solveTimePoint(w: TransientWorkspace, x: Float64Array, maxIterat
     let largest = 0;
     for (let i = 0; i < n; i++) if (isVoltage[i]) largest = Math.max(largest, Math.abs(next[i] - x[i]));
     const damping =
-      iteration >= NEWTON_DAMPING_START_ITERATION && largest > NEWTON_DAMPED_STEP_V ? NEWTON_DAMPED_STEP_V / largest : 1;
+      iteration >= NEWTON_DAMPING_START_ITERATION && largest > NEWTON_DAMPED_STEP_V
+        ? NEWTON_DAMPED_STEP_V / largest
+        : 1;
     let stepSmall = damping === 1 && !ctx.limited;
     for (let i = 0; i < n; i++) {
       const proposed = x[i] + damping * (next[i] - x[i]);

@@ -55,7 +55,9 @@ describe("large-signal requests", () => {
     expect(fieldOf({ transient: { stop: 1e-3, step: 1 } })).toBe("analyses.transient.step");
     expect(fieldOf({ transient: { stop: 1, step: 1e-3, from: "cold" } })).toBe("analyses.transient.from");
     expect(fieldOf({ transient: { stop: 1, step: 1e-3, stpo: 1 } })).toBe("analyses.transient.stpo");
-    expect(fieldOf({ transient: { stop: 1, step: 1e-3, drive: { frequency: 1000 } } })).toBe("analyses.transient.drive");
+    expect(fieldOf({ transient: { stop: 1, step: 1e-3, drive: { frequency: 1000 } } })).toBe(
+      "analyses.transient.drive",
+    );
     expect(fieldOf({ transient: { stop: 1, step: 1e-3, drive: { shape: "burst", frequency: 1000, level: 1 } } })).toBe(
       "analyses.transient.drive.cycles",
     );
@@ -70,7 +72,14 @@ describe("large-signal requests", () => {
 
   it("runs a burst through the headless document, probes and an unknown probe net", () => {
     const doc = runCircuit(
-      file({ transient: { stop: "3m", step: "20u", drive: { shape: "burst", frequency: 1000, level: 1, cycles: 2 }, probe: ["in"] } }),
+      file({
+        transient: {
+          stop: "3m",
+          step: "20u",
+          drive: { shape: "burst", frequency: 1000, level: 1, cycles: 2 },
+          probe: ["in"],
+        },
+      }),
     );
     const t = doc.transient!;
     expect(t.time.length).toBe(t.output.length);
@@ -81,6 +90,8 @@ describe("large-signal requests", () => {
     expect(t.nets.in[after]).toBe(0);
     expect(Object.keys(doc)).toEqual(["transient", "figures"]);
     expect(doc.figures.settle_time_s).toBeNull();
-    expect(() => runCircuit(file({ transient: { stop: 1e-3, step: 1e-5, probe: ["nowhere"] } }))).toThrow(/no net "nowhere"/);
+    expect(() => runCircuit(file({ transient: { stop: 1e-3, step: 1e-5, probe: ["nowhere"] } }))).toThrow(
+      /no net "nowhere"/,
+    );
   });
 });

@@ -258,7 +258,8 @@ export class TransientRun {
           }
           const lte = c.errorConstant * power * Math.abs(xx[needed] * factorial);
           const tolerance =
-            TRANSIENT_RELATIVE_TOLERANCE * Math.max(Math.abs(trial[i]), Math.abs(this.x[i])) + TRANSIENT_VOLTAGE_TOLERANCE_V;
+            TRANSIENT_RELATIVE_TOLERANCE * Math.max(Math.abs(trial[i]), Math.abs(this.x[i])) +
+            TRANSIENT_VOLTAGE_TOLERANCE_V;
           const r = lte / tolerance;
           if (r > ratio) ratio = r;
         }

@@ -217,7 +217,13 @@ function driveRequest(raw: unknown, label: string, scope: Scope): DriveRequest {
   if (r.spl_db !== undefined) drive.splDb = required(r.spl_db, `${label}.spl_db`, "dimensionless", {}, scope);
   else drive.level = required(r.level, `${label}.level`, "dimensionless", {}, scope);
   if (shape === "burst") {
-    drive.cycles = required(r.cycles, `${label}.cycles`, "count", { min: 1, max: MAX_BURST_CYCLES, integer: true }, scope);
+    drive.cycles = required(
+      r.cycles,
+      `${label}.cycles`,
+      "count",
+      { min: 1, max: MAX_BURST_CYCLES, integer: true },
+      scope,
+    );
   } else if (r.cycles !== undefined) {
     throw invalid(`${label}.cycles`, 'applies to a "burst" only; remove it or set "shape": "burst".');
   }

@@ -402,7 +402,11 @@ function tooLongList(input: unknown): SimError | undefined {
   for (const [field, limit] of Object.entries(LIST_LIMITS)) {
     const list = (input as Record<string, unknown>)[field];
     if (Array.isArray(list) && list.length > limit) {
-      return new SimError("invalid_file", `${field}: has ${list.length} entries; a file may hold at most ${limit}. Remove some, or split the design.`, { field });
+      return new SimError(
+        "invalid_file",
+        `${field}: has ${list.length} entries; a file may hold at most ${limit}. Remove some, or split the design.`,
+        { field },
+      );
     }
   }
   return undefined;

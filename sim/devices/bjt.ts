@@ -205,7 +205,13 @@ class Bjt implements Device {
     ];
     if (this.baseResistance) {
       const thermal = thermalCurrentPsd(op.temperature, 1 / numberValue(this.part, "rbb"));
-      out.push({ part: id, label: "base resistance", plus: this.externalBase, minus: this.innerBase, psd: () => thermal });
+      out.push({
+        part: id,
+        label: "base resistance",
+        plus: this.externalBase,
+        minus: this.innerBase,
+        psd: () => thermal,
+      });
     }
     return out;
   }

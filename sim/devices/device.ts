@@ -97,7 +97,14 @@ export interface TransientStampContext extends DcStampContext {
    * Linear capacitance `capacitance` (F) between nets a and b (handles declared by the device), stored quantity
    * `state`: charge q = C·(V(a) − V(b) − offset). `offset` (V) is an EMF in series (a capsule's).
    */
-  capacitance(state: number, handles: TwoTerminalHandles, a: number, b: number, capacitance: number, offset?: number): void;
+  capacitance(
+    state: number,
+    handles: TwoTerminalHandles,
+    a: number,
+    b: number,
+    capacitance: number,
+    offset?: number,
+  ): void;
   /**
    * Linear inductance `inductance` (H) of the branch current `branch` whose row is V(a) − V(b) − … = 0 and whose
    * self entry is `self`: flux φ = L·I, stored quantity `state`; adds −dφ/dt to the row.
@@ -116,10 +123,13 @@ export interface RegionMargin {
   /** V; negative once the device has left its region */
   margin: number;
   /**
-   * The trade's name of the boundary: "saturation" only for a bipolar transistor whose Vce collapses; a JFET
-   * leaving its constant-current region at Vds = Vgs − Vp enters the "ohmic (triode) region".
+   * The boundary in the circuit-file contract's words (max_spl_limited_by.reason). "saturation" there means the
+   * output device ran out of voltage headroom: a bipolar transistor's Vce collapsing, and equally a JFET whose Vds
+   * falls below Vgs − Vp — which the JFET trade calls entering the ohmic (triode) region, so `detail` says that.
    */
-  reason: "cut-off" | "saturation" | "ohmic (triode) region" | "gate conduction" | "grid conduction";
+  reason: "cut-off" | "saturation" | "gate conduction" | "grid conduction";
+  /** the device's own name for the boundary, where the contract's word would mislead (see `reason`) */
+  detail?: string;
 }
 
 export interface DeviceReport {

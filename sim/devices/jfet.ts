@@ -34,6 +34,9 @@ const DRAIN = 0;
 const GATE = 1;
 const SOURCE = 2;
 
+/** What a JFET out of drain headroom has entered, in the JFET's own terms (RegionMargin.detail). */
+export const JFET_HEADROOM_DETAIL = "ohmic (triode) region: Vds below Vgs − Vp";
+
 class Jfet implements Device {
   readonly part: ElaboratedPart;
   private readonly nets: number[];
@@ -121,16 +124,17 @@ class Jfet implements Device {
   }
 
   /**
-   * Nearest boundary (n frame): cut-off at Vov = 0, the ohmic (triode) region at Vds = Vov = Vgs − Vp (the drain
-   * runs out of voltage headroom; not "saturation", which for a JFET is the constant-current region it works in),
-   * and gate conduction at a forward bias of JFET_GATE_FORWARD_WARNING_V.
+   * Nearest boundary (n frame): cut-off at Vov = 0, drain headroom at Vds = Vov = Vgs − Vp — the contract's
+   * "saturation" (out of voltage headroom), with the detail that for a JFET this is the ohmic (triode) region, since
+   * a JFET's own "saturation" is the constant-current region it works in — and gate conduction at a forward bias
+   * of JFET_GATE_FORWARD_WARNING_V.
    */
   regionMargin(x: Float64Array): RegionMargin {
     const [vgs, vds] = this.frameVoltages(x);
     const vov = vgs - this.parameters().pinchOff;
     const candidates: RegionMargin[] = [
       { margin: vov, reason: "cut-off" },
-      { margin: Math.abs(vds) - vov, reason: "ohmic (triode) region" },
+      { margin: Math.abs(vds) - vov, reason: "saturation", detail: JFET_HEADROOM_DETAIL },
       { margin: JFET_GATE_FORWARD_WARNING_V - Math.max(vgs, vgs - vds), reason: "gate conduction" },
     ];
     return candidates.reduce((a, b) => (b.margin < a.margin ? b : a));
@@ -169,14 +173,21 @@ class Jfet implements Device {
     const en = this.part.values.en;
     const gm = Math.abs(point.gm);
     // Contract: drain current noise 4kT·(2/3)·gm, or gm²·en² when a gate-referred en (V/√Hz) is given.
-    const white =
-      typeof en === "number" ? gm * gm * en * en : 4 * BOLTZMANN_J_PER_K * op.temperature * (2 / 3) * gm;
+    const white = typeof en === "number" ? gm * gm * en * en : 4 * BOLTZMANN_J_PER_K * op.temperature * (2 / 3) * gm;
     const flicker = (f: number) => white * (1 + fc / f);
-    const out = [{ part: this.part.id, label: "channel", plus: this.nets[DRAIN], minus: this.nets[SOURCE], psd: flicker }];
+    const out = [
+      { part: this.part.id, label: "channel", plus: this.nets[DRAIN], minus: this.nets[SOURCE], psd: flicker },
+    ];
     const igss = numberValue(this.part, "igss");
     if (igss > 0) {
       const gate = shotPsd(igss);
-      out.push({ part: this.part.id, label: "gate shot", plus: this.nets[GATE], minus: this.nets[SOURCE], psd: () => gate });
+      out.push({
+        part: this.part.id,
+        label: "gate shot",
+        plus: this.nets[GATE],
+        minus: this.nets[SOURCE],
+        psd: () => gate,
+      });
     }
     return out;
   }

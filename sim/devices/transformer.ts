@@ -126,7 +126,11 @@ class Transformer implements Device {
   }
   noiseSources(op: OperatingPointView) {
     if (this.part.noiseless) return [];
-    const out = this.primarySeries.thermalNoise(this.part.id, op.temperature, numberValue(this.part, "primary_resistance"));
+    const out = this.primarySeries.thermalNoise(
+      this.part.id,
+      op.temperature,
+      numberValue(this.part, "primary_resistance"),
+    );
     const rs = numberValue(this.part, "secondary_resistance");
     if (rs > 0) {
       const psd = thermalVoltagePsd(op.temperature, rs);

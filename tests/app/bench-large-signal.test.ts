@@ -72,9 +72,9 @@ describe("bench large-signal views in Chromium", () => {
     const maxSpl = expected.figures.max_spl_db as number;
     expect(maxSpl).toBeGreaterThan(40);
     await expect(page.getByTestId("figure-max-spl").textContent()).resolves.toContain(formatFixed(maxSpl, 1, "dB SPL"));
-    const limit = expected.figures.max_spl_limited_by as { part: string; reason: string };
+    const limit = expected.figures.max_spl_limited_by as { part: string; reason: string; detail?: string };
     await expect(page.getByTestId("figure-max-spl").textContent()).resolves.toContain(
-      `${limit.part} leaves its region: ${limit.reason}`,
+      `${limit.part} leaves its region: ${limit.detail ? `out of headroom, ${limit.detail}` : limit.reason}`,
     );
     await page.screenshot({ path: screenshotPath("bench-distortion") });
   });

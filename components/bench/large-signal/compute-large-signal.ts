@@ -56,7 +56,12 @@ export interface PowerOnJobResult {
 
 type FileShape = { analyses?: Record<string, unknown> };
 
-function run(file: unknown, analyses: Record<string, unknown>, variant: string | undefined, onProgress?: ProgressCallback) {
+function run(
+  file: unknown,
+  analyses: Record<string, unknown>,
+  variant: string | undefined,
+  onProgress?: ProgressCallback,
+) {
   const circuit = elaborate({ ...(file as FileShape), analyses }, { variant });
   checkTopology(circuit);
   const result = simulate(circuit, {
@@ -73,7 +78,10 @@ function attempt<T>(work: () => T): Outcome<T> {
   }
 }
 
-export function solveDistortionJob(request: DistortionJobRequest, onProgress?: ProgressCallback): Outcome<DistortionJobResult> {
+export function solveDistortionJob(
+  request: DistortionJobRequest,
+  onProgress?: ProgressCallback,
+): Outcome<DistortionJobResult> {
   return attempt(() => {
     const period = 1 / request.frequency;
     const result = run(

@@ -88,7 +88,14 @@ export function DistortionPanel({
           disabled={hasCapsule ? null : "Distortion against SPL needs a capsule in the circuit."}
           onRun={() => {
             setPicked(null);
-            start({ circuit, variant, frequency, splDb: levels, waveformSplDb: waveformLevel, probe: net ? [net] : [] });
+            start({
+              circuit,
+              variant,
+              frequency,
+              splDb: levels,
+              waveformSplDb: waveformLevel,
+              probe: net ? [net] : [],
+            });
           }}
         />
       </div>
@@ -99,7 +106,9 @@ export function DistortionPanel({
         </p>
       )}
       {result && (
-        <div className={`grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)] ${job.stale || outdated ? "opacity-60" : ""}`}>
+        <div
+          className={`grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)] ${job.stale || outdated ? "opacity-60" : ""}`}
+        >
           <div className="min-w-0 space-y-3">
             {thd && <PlotlyFigure data={thd.data} layout={thd.layout} label="THD against SPL" className="w-full" />}
             {wave && <PlotlyFigure data={wave.data} layout={wave.layout} label="Waveform" className="w-full" />}
@@ -123,8 +132,11 @@ export function DistortionPanel({
             {point && (
               <table className="w-full text-sm" data-testid="harmonic-table">
                 <caption className="text-left text-xs text-ink-soft">
-                  THD <span className="font-mono" data-testid="harmonic-thd">{point.thd_percent.toPrecision(3)} %</span> ·
-                  fundamental {point.fundamental.toPrecision(3)} V peak
+                  THD{" "}
+                  <span className="font-mono" data-testid="harmonic-thd">
+                    {point.thd_percent.toPrecision(3)} %
+                  </span>{" "}
+                  · fundamental {point.fundamental.toPrecision(3)} V peak
                 </caption>
                 <thead>
                   <tr className="border-b border-rule text-left text-xs text-ink-soft">
@@ -134,13 +146,17 @@ export function DistortionPanel({
                   </tr>
                 </thead>
                 <tbody className="font-mono">
-                  {point.harmonics_db.map((db, i) => ({ order: i + 2, db })).map(({ order, db }) => (
-                    <tr key={order} className="border-b border-rule/60">
-                      <td className="py-0.5 font-sans">H{order}</td>
-                      <td className="py-0.5 text-right">{db <= -200 ? "below −200" : db.toFixed(1).replace("-", "−")}</td>
-                      <td className="py-0.5 text-right">{harmonicPercent(db).toPrecision(3)}</td>
-                    </tr>
-                  ))}
+                  {point.harmonics_db
+                    .map((db, i) => ({ order: i + 2, db }))
+                    .map(({ order, db }) => (
+                      <tr key={order} className="border-b border-rule/60">
+                        <td className="py-0.5 font-sans">H{order}</td>
+                        <td className="py-0.5 text-right">
+                          {db <= -200 ? "below −200" : db.toFixed(1).replace("-", "−")}
+                        </td>
+                        <td className="py-0.5 text-right">{harmonicPercent(db).toPrecision(3)}</td>
+                      </tr>
+                    ))}
                 </tbody>
               </table>
             )}

@@ -11,8 +11,24 @@ const MARGIN = { l: 56, r: 16, t: 28, b: 44 };
 
 function marker(x: number, label: string, dash: string) {
   return {
-    shape: { type: "line", x0: x, x1: x, yref: "paper", y0: 0, y1: 1, line: { color: OVERLAY_COLOURS[2], dash, width: 1.5 } },
-    annotation: { x, yref: "paper", y: 1, text: label, showarrow: false, yanchor: "bottom", font: { ...FONT, size: 10 } },
+    shape: {
+      type: "line",
+      x0: x,
+      x1: x,
+      yref: "paper",
+      y0: 0,
+      y1: 1,
+      line: { color: OVERLAY_COLOURS[2], dash, width: 1.5 },
+    },
+    annotation: {
+      x,
+      yref: "paper",
+      y: 1,
+      text: label,
+      showarrow: false,
+      yanchor: "bottom",
+      font: { ...FONT, size: 10 },
+    },
   };
 }
 
@@ -30,7 +46,11 @@ export function thdPlot(points: DistortionPoint[], figures: Figures) {
   ];
   const marks = [
     [figures.max_spl_db, `${MAX_SPL_THD_PERCENT} %: ${(figures.max_spl_db as number)?.toFixed?.(1)} dB`, "dash"],
-    [figures.max_spl_1pct_db, `${MAX_SPL_1PCT_THD_PERCENT} %: ${(figures.max_spl_1pct_db as number)?.toFixed?.(1)} dB`, "dot"],
+    [
+      figures.max_spl_1pct_db,
+      `${MAX_SPL_1PCT_THD_PERCENT} %: ${(figures.max_spl_1pct_db as number)?.toFixed?.(1)} dB`,
+      "dot",
+    ],
   ]
     .filter(([x]) => typeof x === "number")
     .map(([x, label, dash]) => marker(x as number, label as string, dash as string));
@@ -61,7 +81,14 @@ export function thdPlot(points: DistortionPoint[], figures: Figures) {
 export function waveformPlot(waveform: TransientResult, net: string | null, outputLabel: string) {
   const t = waveform.time.map((s) => s * 1000);
   const data: Record<string, unknown>[] = [
-    { type: "scatter", mode: "lines", name: outputLabel, x: t, y: waveform.output, line: { color: PLOT_COLOURS.trace, width: 2 } },
+    {
+      type: "scatter",
+      mode: "lines",
+      name: outputLabel,
+      x: t,
+      y: waveform.output,
+      line: { color: PLOT_COLOURS.trace, width: 2 },
+    },
   ];
   if (net && waveform.nets[net]) {
     data.push({

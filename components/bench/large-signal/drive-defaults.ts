@@ -40,10 +40,16 @@ function literal(text: string, quantity: Quantity): number | null {
 export function driveFrequency(analyses: Analyses): number {
   const distortion = record(analyses?.distortion);
   const drive = record(record(analyses?.transient)?.drive);
-  return positive(distortion?.frequency, QUANTITIES.frequency) ?? positive(drive?.frequency, QUANTITIES.frequency) ?? DEFAULT_DRIVE_FREQUENCY_HZ;
+  return (
+    positive(distortion?.frequency, QUANTITIES.frequency) ??
+    positive(drive?.frequency, QUANTITIES.frequency) ??
+    DEFAULT_DRIVE_FREQUENCY_HZ
+  );
 }
 
 export function powerOnStop(analyses: Analyses): number {
   const transient = record(analyses?.transient);
-  return (transient?.from === "power-on" && positive(transient.stop, QUANTITIES.dimensionless)) || DEFAULT_POWER_ON_STOP_S;
+  return (
+    (transient?.from === "power-on" && positive(transient.stop, QUANTITIES.dimensionless)) || DEFAULT_POWER_ON_STOP_S
+  );
 }

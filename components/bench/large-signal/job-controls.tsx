@@ -52,7 +52,9 @@ export function JobControls<R>({
         </span>
       )}
       {!running && outdated && job.result?.ok && (
-        <span className="rounded bg-brass-light px-1.5 py-0.5 text-ink">The design changed since this run; run again.</span>
+        <span className="rounded bg-brass-light px-1.5 py-0.5 text-ink">
+          The design changed since this run; run again.
+        </span>
       )}
       {failed && !running && (
         <span className="text-caution" role="alert">

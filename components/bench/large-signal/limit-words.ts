@@ -1,7 +1,7 @@
 /**
  * max_spl_db in words: the level, and what limits it ("J1 leaves its region: cut-off"). The engine names the
- * boundary in the trade's words (sim/devices/device.ts RegionMargin): cut-off, ohmic (triode) region for a JFET,
- * saturation for a bipolar transistor, gate or grid conduction.
+ * boundary in the contract's words (sim/devices/device.ts RegionMargin) and, where that word would mislead, in the
+ * device's own (a JFET out of drain headroom: "saturation", detail "ohmic (triode) region …"): the detail is shown.
  */
 import type { Figures } from "@/sim/results";
 import { formatFixed } from "../results/format";
@@ -14,9 +14,9 @@ export interface MaxSplWords {
 
 export function limitedByWords(limit: unknown): string | null {
   if (limit === null || typeof limit !== "object") return null;
-  const { part, reason } = limit as { part?: unknown; reason?: unknown };
+  const { part, reason, detail } = limit as { part?: unknown; reason?: unknown; detail?: unknown };
   if (typeof part !== "string" || typeof reason !== "string") return null;
-  return `${part} leaves its region: ${reason}`;
+  return `${part} leaves its region: ${typeof detail === "string" ? `out of headroom, ${detail}` : reason}`;
 }
 
 export function maxSplWords(figures: Figures): MaxSplWords {

@@ -25,7 +25,14 @@ function powerOnPlot(result: PowerOnJobResult, net: string | null) {
     line: { color: i === 0 ? PLOT_COLOURS.trace : OVERLAY_COLOURS[3 + i], width: 2 },
   }));
   if (net && result.transient.nets[net]) {
-    data.push({ type: "scatter", mode: "lines", name: `V(${net})`, x: t, y: result.transient.nets[net], line: { color: OVERLAY_COLOURS[0], width: 1.5 } });
+    data.push({
+      type: "scatter",
+      mode: "lines",
+      name: `V(${net})`,
+      x: t,
+      y: result.transient.nets[net],
+      line: { color: OVERLAY_COLOURS[0], width: 1.5 },
+    });
   }
   const settle = result.settleTimeS;
   return {
@@ -42,11 +49,30 @@ function powerOnPlot(result: PowerOnJobResult, net: string | null) {
       shapes:
         settle === null
           ? []
-          : [{ type: "line", x0: settle, x1: settle, yref: "paper", y0: 0, y1: 1, line: { color: OVERLAY_COLOURS[2], dash: "dash" } }],
+          : [
+              {
+                type: "line",
+                x0: settle,
+                x1: settle,
+                yref: "paper",
+                y0: 0,
+                y1: 1,
+                line: { color: OVERLAY_COLOURS[2], dash: "dash" },
+              },
+            ],
       annotations:
         settle === null
           ? []
-          : [{ x: settle, yref: "paper", y: 0.05, text: `settled: ${settle.toFixed(2)} s`, showarrow: false, xanchor: "left" }],
+          : [
+              {
+                x: settle,
+                yref: "paper",
+                y: 0.05,
+                text: `settled: ${settle.toFixed(2)} s`,
+                showarrow: false,
+                xanchor: "left",
+              },
+            ],
     },
   };
 }
@@ -70,14 +96,15 @@ export function PowerOnPanel({
   const [stopText, setStopText] = useState(String(defaultStop));
   const [net, setNet] = useState("");
   const stop = Number(stopText);
-  const stopProblem = Number.isFinite(stop) && stop > 0 && stop <= 600 ? null : "Give a run length between 0 and 600 s.";
+  const stopProblem =
+    Number.isFinite(stop) && stop > 0 && stop <= 600 ? null : "Give a run length between 0 and 600 s.";
   const result = job.result?.ok ? job.result.value : null;
   const plot = useMemo(() => (result ? powerOnPlot(result, request?.probe[0] ?? null) : null), [result, request]);
   return (
     <section aria-label="Power-on" className="space-y-3" data-testid="power-on-panel">
       <p className="rounded border border-caution/40 bg-caution-bg px-2 py-1 text-xs text-ink">
-        Caution: a polarisation supply holds its charge after switch-off; discharge it before touching the capsule
-        or the bias network, and follow local codes and qualified practice for the supply voltages involved.
+        Caution: a polarisation supply holds its charge after switch-off; discharge it before touching the capsule or
+        the bias network, and follow local codes and qualified practice for the supply voltages involved.
       </p>
       <div className="flex flex-wrap items-end gap-4 text-sm">
         <label className="flex flex-col text-xs">
@@ -111,7 +138,9 @@ export function PowerOnPanel({
           label="power-on"
           runLabel="Run power-on"
           outdated={outdated}
-          disabled={stopProblem ?? (hasCapsule ? null : "The power-on view follows a capsule's polarisation; add a capsule.")}
+          disabled={
+            stopProblem ?? (hasCapsule ? null : "The power-on view follows a capsule's polarisation; add a capsule.")
+          }
           onRun={() => start({ circuit, variant, stop, probe: net ? [net] : [] })}
         />
       </div>
@@ -120,7 +149,9 @@ export function PowerOnPanel({
           <p className="text-sm" data-testid="settle-time">
             Settle time (polarisation within {100 * POWER_ON_SETTLE_FRACTION} % of its final value):{" "}
             <span className="font-mono">
-              {result.settleTimeS === null ? "not settled by the end of the run — run for longer" : formatSi(result.settleTimeS, "s")}
+              {result.settleTimeS === null
+                ? "not settled by the end of the run — run for longer"
+                : formatSi(result.settleTimeS, "s")}
             </span>
           </p>
           {plot && <PlotlyFigure data={plot.data} layout={plot.layout} label="Power-on" className="w-full" />}
