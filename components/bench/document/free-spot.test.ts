@@ -1,0 +1,73 @@
+/**
+ * New items land on free grid space: checked with the plain axis-aligned rectangle test (two boxes are apart when
+ * one lies wholly left, right, above or below the other — common practice), written out here independently of
+ * free-spot.ts's own `overlaps`.
+ */
+import { describe, expect, it } from "vitest";
+import { PART_KINDS } from "@/sim/circuit/types";
+import { createBenchStore } from "../store/bench-store";
+import { CLEARANCE, freeSpot, occupied, partFootprint, type Rect } from "./free-spot";
+import { openDocument } from "./document";
+import { emptyLayout, GRID } from "./layout";
+
+const emptyDocument = () =>
+  openDocument({ format: "backplate/circuit", version: 1, parts: [], output: { plus: "0", minus: "0" } }, emptyLayout());
+
+/** Boxes apart by at least `gap` on some axis (separating-axis test for axis-aligned boxes). */
+const apart = (a: Rect, b: Rect, gap: number) =>
+  a.x + a.width + gap <= b.x || b.x + b.width + gap <= a.x || a.y + a.height + gap <= b.y || b.y + b.height + gap <= a.y;
+
+function footprints(store: ReturnType<typeof createBenchStore>): Rect[] {
+  const { document } = store.getState();
+  return occupied(document.layout, new Map(document.circuit.parts.map((p) => [p.id, p.kind])));
+}
+
+function expectAllApart(rects: Rect[]) {
+  for (let i = 0; i < rects.length; i++)
+    for (let j = i + 1; j < rects.length; j++) expect(apart(rects[i], rects[j], CLEARANCE), `${i} and ${j}`).toBe(true);
+}
+
+describe("free spot for a new item", () => {
+  it("takes the asked-for grid point when it is free", () => {
+    expect(freeSpot({ x: 101, y: 59 }, { width: 120, height: 80 }, [])).toEqual({ x: 100, y: 60 });
+  });
+
+  it("moves off an occupied point to the nearest free grid point", () => {
+    const taken: Rect[] = [{ x: 0, y: 0, width: 120, height: 80 }];
+    const spot = freeSpot({ x: 0, y: 0 }, { width: 120, height: 80 }, taken);
+    expect(apart({ ...spot, width: 120, height: 80 }, taken[0], CLEARANCE)).toBe(true);
+    expect(Math.abs(spot.x % GRID)).toBe(0);
+    expect(Math.abs(spot.y % GRID)).toBe(0);
+    // nearest: moving down by the box's height and the clearance (100) beats moving right by 140
+    expect(spot).toEqual({ x: 0, y: 100 });
+  });
+
+  it("keeps every part kind dropped on one point apart from the others (the store's addPart)", () => {
+    const store = createBenchStore(emptyDocument());
+    for (const kind of PART_KINDS) store.getState().addPart(kind, { x: 200, y: 200 });
+    store.getState().addGround({ x: 200, y: 200 });
+    store.getState().addNetLabel({ x: 200, y: 200 }, "out");
+    const rects = footprints(store);
+    expect(rects).toHaveLength(PART_KINDS.length + 2);
+    expectAllApart(rects);
+  });
+
+  it("pastes a copy where it covers nothing, even over a neighbour below-right", () => {
+    const store = createBenchStore(emptyDocument());
+    const r1 = store.getState().addPart("resistor", { x: 0, y: 0 }) as string;
+    store.getState().addPart("capacitor", { x: 40, y: 60 });
+    store.getState().select({ parts: [r1] });
+    store.getState().copy();
+    store.getState().paste();
+    store.getState().paste();
+    expect(store.getState().document.circuit.parts).toHaveLength(4);
+    expectAllApart(footprints(store));
+  });
+
+  it("counts the label band under a part as taken", () => {
+    const r = partFootprint("resistor", 0, 0, 0);
+    expect(r.height).toBeGreaterThan(40);
+    const under = freeSpot({ x: 0, y: 60 }, { width: 120, height: 40 }, [r]);
+    expect(apart({ ...under, width: 120, height: 40 }, r, CLEARANCE)).toBe(true);
+  });
+});
