@@ -23,7 +23,7 @@ import { OverlayControls, type RevisionSource } from "../overlays/overlay-contro
 import { type PinnedResult, pinCurve } from "../overlays/pinned";
 import { OVERLAY_COLOURS, PLOT_COLOURS } from "../plots/palette";
 import type { PlotCurve } from "../plots/traces";
-import type { BenchSolveError } from "../solver/protocol";
+import type { BenchSolveError, FamilyResult } from "../solver/protocol";
 import { type CircuitChanges, type OverlayChoice, useLiveSolve } from "../solver/use-live-solve";
 import { useBenchStore } from "../store/bench-store-context";
 import { type CurveRow, CurvesTable } from "./curves-table";
@@ -71,6 +71,9 @@ export interface BenchLiveState {
 }
 
 const NO_OVERLAYS: OverlayChoice = { variants: [], revisions: [] };
+// one empty list for "no overlay curves", so the curves (and the plot's data) keep their identity across renders:
+// a fresh [] each render rebuilt the Bode traces and made Plotly redraw on every render of the results
+const NO_FAMILY_CURVES: FamilyResult["curves"] = [];
 
 export function BenchResults({
   document,
@@ -130,7 +133,7 @@ export function BenchResults({
     };
   }, [doc, variant]);
 
-  const familyCurves = family.result?.curves ?? [];
+  const familyCurves = family.result?.curves ?? NO_FAMILY_CURVES;
   const curves = useMemo(() => {
     const list: PlotCurve[] = [];
     if (liveCurve) list.push(liveCurve);
