@@ -14,6 +14,7 @@ import type { DestinationChoice } from "../destinations/destination-picker";
 import { DestinationPicker } from "../destinations/destination-picker";
 import { DEFAULT_CABLE_LENGTH_M } from "../destinations/presets";
 import type { BenchDocument } from "../document";
+import { ELV_LIMIT_V } from "../document/hazards";
 import { ExplainPanel } from "../explain/explain-panel";
 import { LargeSignalPanel } from "../large-signal/large-signal-panel";
 import { maxSplWords } from "../large-signal/limit-words";
@@ -67,7 +68,17 @@ export interface BenchResultsProps {
 
 export interface BenchLiveState {
   error: BenchSolveError | null;
-  op: OpResult | null;
+  /** the operating point's nets above the extra-low-voltage limit (null until an operating point has solved) */
+  highNets: Record<string, number> | null;
+}
+
+/** The nets the caution banner names: only these, so a result that moves no high net leaves the banner alone. */
+function highNetsOf(op: OpResult | null): Record<string, number> | null {
+  if (!op) return null;
+  const high: Record<string, number> = {};
+  for (const [net, volts] of Object.entries(op.nets))
+    if (typeof volts === "number" && Math.abs(volts) > ELV_LIMIT_V) high[net] = volts;
+  return high;
 }
 
 const NO_OVERLAYS: OverlayChoice = { variants: [], revisions: [] };
@@ -117,7 +128,7 @@ export function BenchResults({
   const doc = result?.document;
   const liveOp = doc?.op ?? null;
   useEffect(() => {
-    onLiveState?.({ error: live.error, op: liveOp });
+    onLiveState?.({ error: live.error, highNets: highNetsOf(liveOp) });
   }, [onLiveState, live.error, liveOp]);
 
   const liveCurve = useMemo((): PlotCurve | null => {
