@@ -97,6 +97,21 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
   );
   const selectedPart =
     selection.parts.length === 1 ? document.circuit.parts.find((p) => p.id === selection.parts[0]) : undefined;
+  // stable props for the results, which memo their panels
+  const selectedId = selectedPart?.id;
+  const selectedKind = selectedPart?.kind;
+  const selected = useMemo(
+    () => (selectedId && selectedKind ? { id: selectedId, kind: selectedKind } : null),
+    [selectedId, selectedKind],
+  );
+  const onSelectPart = useCallback((id: string) => store.getState().select({ parts: [id] }), [store]);
+  const onApplyValues = useCallback(
+    (id: string, values: Record<string, string>) => {
+      const part = store.getState().document.circuit.parts.find((p) => p.id === id);
+      if (part) store.getState().updatePart(id, { values: { ...part.values, ...values } });
+    },
+    [store],
+  );
 
   const onImport = (text: string) => {
     const result = importCircuitText(text);
@@ -228,16 +243,9 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
           document={document}
           variant={variant ?? undefined}
           readOnly={readOnly}
-          selected={selectedPart ? { id: selectedPart.id, kind: selectedPart.kind } : null}
-          onSelectPart={(id) => store.getState().select({ parts: [id] })}
-          onApplyValues={
-            readOnly
-              ? undefined
-              : (id, values) => {
-                  const part = store.getState().document.circuit.parts.find((p) => p.id === id);
-                  if (part) store.getState().updatePart(id, { values: { ...part.values, ...values } });
-                }
-          }
+          selected={selected}
+          onSelectPart={onSelectPart}
+          onApplyValues={readOnly ? undefined : onApplyValues}
           revisions={workspaceId && designId ? { workspaceId, designId } : undefined}
           onLiveState={onLiveState}
         />

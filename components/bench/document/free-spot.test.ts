@@ -6,7 +6,8 @@
 import { describe, expect, it } from "vitest";
 import { PART_KINDS } from "@/sim/circuit/types";
 import { createBenchStore } from "../store/bench-store";
-import { CLEARANCE, freeSpot, occupied, partFootprint, type Rect } from "./free-spot";
+import { CLEARANCE, freeShift, occupied, partFootprint, type Rect } from "./free-spot";
+import { newPart } from "./part-defaults";
 import { openDocument } from "./document";
 import { emptyLayout, GRID } from "./layout";
 
@@ -19,7 +20,7 @@ const apart = (a: Rect, b: Rect, gap: number) =>
 
 function footprints(store: ReturnType<typeof createBenchStore>): Rect[] {
   const { document } = store.getState();
-  return occupied(document.layout, new Map(document.circuit.parts.map((p) => [p.id, p.kind])));
+  return occupied(document.layout, document.circuit.parts, document.circuit.parameters);
 }
 
 function expectAllApart(rects: Rect[]) {
@@ -28,18 +29,20 @@ function expectAllApart(rects: Rect[]) {
 }
 
 describe("free spot for a new item", () => {
-  it("takes the asked-for grid point when it is free", () => {
-    expect(freeSpot({ x: 101, y: 59 }, { width: 120, height: 80 }, [])).toEqual({ x: 100, y: 60 });
+  it("leaves a footprint that is clear where it is", () => {
+    expect(freeShift({ x: 100, y: 60, width: 120, height: 80 }, [{ x: 0, y: 0, width: 60, height: 60 }])).toEqual({
+      dx: 0,
+      dy: 0,
+    });
   });
 
-  it("moves off an occupied point to the nearest free grid point", () => {
+  it("moves a footprint off an occupied place by the fewest grid steps", () => {
     const taken: Rect[] = [{ x: 0, y: 0, width: 120, height: 80 }];
-    const spot = freeSpot({ x: 0, y: 0 }, { width: 120, height: 80 }, taken);
-    expect(apart({ ...spot, width: 120, height: 80 }, taken[0], CLEARANCE)).toBe(true);
-    expect(Math.abs(spot.x % GRID)).toBe(0);
-    expect(Math.abs(spot.y % GRID)).toBe(0);
-    // nearest: moving down by the box's height and the clearance (100) beats moving right by 140
-    expect(spot).toEqual({ x: 0, y: 100 });
+    const shift = freeShift({ x: 0, y: 0, width: 120, height: 80 }, taken);
+    expect(apart({ x: shift.dx, y: shift.dy, width: 120, height: 80 }, taken[0], CLEARANCE)).toBe(true);
+    // nearest: down by the box's height and the clearance (100) beats right by 140
+    expect(shift).toEqual({ dx: 0, dy: 100 });
+    expect(shift.dy % GRID).toBe(0);
   });
 
   it("keeps every part kind dropped on one point apart from the others (the store's addPart)", () => {
@@ -64,10 +67,14 @@ describe("free spot for a new item", () => {
     expectAllApart(footprints(store));
   });
 
-  it("counts the label band under a part as taken", () => {
-    const r = partFootprint("resistor", 0, 0, 0);
-    expect(r.height).toBeGreaterThan(40);
-    const under = freeSpot({ x: 0, y: 60 }, { width: 120, height: 40 }, [r]);
-    expect(apart({ ...under, width: 120, height: 40 }, r, CLEARANCE)).toBe(true);
+  it("counts the label under a part as taken, also where it is wider than the symbol", () => {
+    const jfet = newPart("jfet", "J1");
+    const r = partFootprint(jfet, { x: 0, y: 0, rotation: 0 }, {});
+    expect(r.height).toBeGreaterThan(100);
+    // the JFET's key value (its channel and pinch-off) is longer than its 100-unit symbol is wide
+    expect(r.width).toBeGreaterThan(100);
+    expect(r.x).toBeLessThan(0);
+    const beside = freeShift({ x: 120, y: 0, width: 100, height: 140 }, [r]);
+    expect(apart({ x: 120 + beside.dx, y: beside.dy, width: 100, height: 140 }, r, CLEARANCE)).toBe(true);
   });
 });

@@ -6,7 +6,7 @@
  * explanation; `onApplyValues` writes a calculator's result into a part (absent or readOnly: no writing).
  */
 import dynamic from "next/dynamic";
-import { useCallback, useEffect, useMemo, useState } from "react";
+import { memo, useCallback, useEffect, useMemo, useState } from "react";
 import type { OpResult } from "@/sim/results";
 import { CalculatorsPanel } from "../calculators/calculators-panel";
 import type { ApplyValues } from "../calculators/capsule-calculator";
@@ -39,6 +39,14 @@ const PlotsPanel = dynamic(() => import("../plots/plots-panel"), {
     <div className="h-[420px] animate-pulse rounded bg-paper-deep" role="status" aria-label="Loading plots" />
   ),
 });
+
+// A value change renders the results twice (the edit marks them stale, then the result lands): memo keeps the
+// panels whose props did not change (the operating point while solving, the plots until their data changes) from
+// rendering again. Their props are kept stable below for that.
+const Plots = memo(PlotsPanel);
+const Figures = memo(FiguresPanel);
+const OpPanel = memo(OperatingPointPanel);
+const Curves = memo(CurvesTable);
 
 type Tab = "op" | "large" | "overlays" | "measurements" | "explain" | "calculators";
 const TABS: { name: Tab; label: string }[] = [
@@ -166,7 +174,7 @@ export function BenchResults({
     return list;
   }, [liveCurve, pinned, measured, familyCurves]);
 
-  const rows: CurveRow[] = [
+  const rows = useMemo((): CurveRow[] => [
     ...(doc
       ? [{ id: "live", label: liveCurve?.label ?? "Design", colour: PLOT_COLOURS.trace, figures: doc.figures }]
       : []),
@@ -188,12 +196,21 @@ export function BenchResults({
       figures: c.figures,
       problem: c.error?.message,
     })),
-  ];
+  ], [doc, liveCurve, pinned, familyCurves]);
 
   const envelope = family.result?.spread?.envelope ?? null;
   const spreadMissing = overlays.spread && family.status === "ready" && !family.result?.spread?.envelope;
   const hasCapsule = document.circuit.parts.some((p) => p.kind === "capsule" && p.enabled);
-  const warnings = [...(doc?.op?.warnings ?? []), ...(doc?.ac?.warnings ?? []), ...(doc?.noise?.warnings ?? [])];
+  const warnings = useMemo(
+    () => [...(doc?.op?.warnings ?? []), ...(doc?.ac?.warnings ?? []), ...(doc?.noise?.warnings ?? [])],
+    [doc],
+  );
+  const splValue = maxSpl?.value ?? "—";
+  const splReason = maxSpl ? (maxSpl.note ?? undefined) : "run the distortion panel (Large signal tab) to find it";
+  const extraRows = useMemo(
+    () => [{ key: "max-spl", label: "Maximum SPL", value: splValue, reason: splReason }],
+    [splValue, splReason],
+  );
 
   return (
     <div
@@ -214,26 +231,19 @@ export function BenchResults({
             )}
           </div>
           {doc ? (
-            <FiguresPanel
+            <Figures
               figures={doc.figures}
               hasCapsule={hasCapsule}
               noiseRan={doc.noise !== undefined}
               stale={live.stale}
-              extraRows={[
-                {
-                  key: "max-spl",
-                  label: "Maximum SPL",
-                  value: maxSpl?.value ?? "—",
-                  reason: maxSpl ? (maxSpl.note ?? undefined) : "run the distortion panel (Large signal tab) to find it",
-                },
-              ]}
+              extraRows={extraRows}
             />
           ) : (
             <p className="text-sm text-ink-soft">
               {live.status === "error" ? "Nothing has solved yet." : "Solving the design…"}
             </p>
           )}
-          {rows.length > 1 && <CurvesTable rows={rows} />}
+          {rows.length > 1 && <Curves rows={rows} />}
           {family.status === "running" && (
             <div className="flex items-center gap-2 text-xs" data-testid="family-progress">
               <progress
@@ -258,7 +268,7 @@ export function BenchResults({
           )}
         </div>
         {doc && result && (
-          <PlotsPanel
+          <Plots
             curves={curves}
             envelope={envelope}
             noise={doc.noise ?? null}
@@ -286,7 +296,7 @@ export function BenchResults({
         <div className="pt-3" role="tabpanel">
           {tab === "op" &&
             (doc?.op ? (
-              <OperatingPointPanel op={doc.op} warnings={warnings} onSelectPart={onSelectPart} />
+              <OpPanel op={doc.op} warnings={warnings} onSelectPart={onSelectPart} />
             ) : (
               <p className="text-sm text-ink-soft">No operating point yet.</p>
             ))}

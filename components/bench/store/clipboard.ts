@@ -6,7 +6,7 @@
  */
 import type { BenchPart } from "../document/circuit";
 import type { BenchDocument } from "../document/document";
-import { freeSpot, groundFootprint, occupied, partFootprint, type Rect } from "../document/free-spot";
+import { freeShift, groundFootprint, occupied, partFootprint, type Rect } from "../document/free-spot";
 import { nextDesignator, nextFreeId } from "../document/ids";
 import { type Endpoint, GRID, type Placement, type Wire } from "../document/layout";
 import { syncNets } from "../document/nets";
@@ -23,13 +23,10 @@ export interface Clip {
 const PASTE_OFFSET = 2 * GRID;
 
 /** The smallest rect holding every footprint of the clip, where it was copied from. */
-function clipBounds(clip: Clip): Rect {
+function clipBounds(clip: Clip, parameters: BenchDocument["circuit"]["parameters"]): Rect {
   const rects = [
-    ...clip.parts.map((p) => {
-      const at = clip.placements[p.id] ?? { x: 0, y: 0, rotation: 0 };
-      return partFootprint(p.kind, at.rotation, at.x, at.y);
-    }),
-    ...Object.values(clip.grounds).map((g) => groundFootprint(g.x, g.y)),
+    ...clip.parts.map((p) => partFootprint(p, clip.placements[p.id] ?? { x: 0, y: 0, rotation: 0 }, parameters)),
+    ...Object.values(clip.grounds).map(groundFootprint),
   ];
   const x = Math.min(...rects.map((r) => r.x));
   const y = Math.min(...rects.map((r) => r.y));
@@ -40,10 +37,11 @@ function clipBounds(clip: Clip): Rect {
 
 /** The shift that takes the clip to the nearest free space from one PASTE_OFFSET below-right of where it was. */
 function pasteShift(document: BenchDocument, clip: Clip): { dx: number; dy: number } {
-  const bounds = clipBounds(clip);
-  const taken = occupied(document.layout, new Map(document.circuit.parts.map((p) => [p.id, p.kind])));
-  const to = freeSpot({ x: bounds.x + PASTE_OFFSET, y: bounds.y + PASTE_OFFSET }, bounds, taken);
-  return { dx: to.x - bounds.x, dy: to.y - bounds.y };
+  const { parts, parameters } = document.circuit;
+  const bounds = clipBounds(clip, parameters);
+  const start = { ...bounds, x: bounds.x + PASTE_OFFSET, y: bounds.y + PASTE_OFFSET };
+  const { dx, dy } = freeShift(start, occupied(document.layout, parts, parameters));
+  return { dx: PASTE_OFFSET + dx, dy: PASTE_OFFSET + dy };
 }
 
 export function copySelection(document: BenchDocument, selection: Selection): Clip | null {

@@ -7,7 +7,14 @@ import { GROUND, type PartKind } from "@/sim/circuit/types";
 import type { BenchPart, BenchVariant, RawValue } from "../document/circuit";
 import type { BenchDocument } from "../document/document";
 import { nextDesignator, nextFreeId } from "../document/ids";
-import { freeSpot, groundFootprint, labelFootprint, occupied, partFootprint } from "../document/free-spot";
+import {
+  freeShift,
+  groundFootprint,
+  labelFootprint,
+  occupied,
+  partFootprint,
+  type Rect,
+} from "../document/free-spot";
 import { type Endpoint, endpointKey, GRID, type Placement, type Rotation, type Wire } from "../document/layout";
 import { syncNets } from "../document/nets";
 import { newPart } from "../document/part-defaults";
@@ -30,7 +37,14 @@ function nextWireId(wires: Wire[]): string {
 
 /** What is drawn already, as footprints (a new item keeps clear of them). */
 function taken(document: BenchDocument) {
-  return occupied(document.layout, new Map(document.circuit.parts.map((p) => [p.id, p.kind])));
+  return occupied(document.layout, document.circuit.parts, document.circuit.parameters);
+}
+
+/** `at` snapped, moved on by whole grid steps until `footprintAt(at)` covers nothing drawn. */
+function freePlace(document: BenchDocument, at: { x: number; y: number }, footprintAt: (at: { x: number; y: number }) => Rect) {
+  const snapped = { x: snap(at.x), y: snap(at.y) };
+  const { dx, dy } = freeShift(footprintAt(snapped), taken(document));
+  return { x: snapped.x + dx, y: snapped.y + dy };
 }
 
 /** Adds a part with its box's top-left at `at`, or at the nearest grid point where it covers nothing drawn. */
@@ -40,7 +54,8 @@ export function addPart(document: BenchDocument, kind: PartKind, at: { x: number
     document.circuit.parts.map((p) => p.id),
   );
   const part = newPart(kind, id);
-  const spot = freeSpot(at, partFootprint(kind, 0, 0, 0), taken(document));
+  const parameters = document.circuit.parameters;
+  const spot = freePlace(document, at, (p) => partFootprint(part, { ...p, rotation: 0 }, parameters));
   const next: BenchDocument = {
     circuit: { ...document.circuit, parts: [...document.circuit.parts, part] },
     layout: {
@@ -53,7 +68,7 @@ export function addPart(document: BenchDocument, kind: PartKind, at: { x: number
 
 export function addGround(document: BenchDocument, at: { x: number; y: number }) {
   const id = nextFreeId("g", Object.keys(document.layout.grounds));
-  const spot = freeSpot(at, groundFootprint(0, 0), taken(document));
+  const spot = freePlace(document, at, groundFootprint);
   return {
     document: {
       ...document,
@@ -65,7 +80,7 @@ export function addGround(document: BenchDocument, at: { x: number; y: number })
 
 export function addNetLabel(document: BenchDocument, at: { x: number; y: number }, net: string) {
   const id = nextFreeId("n", Object.keys(document.layout.netLabels));
-  const spot = freeSpot(at, labelFootprint(net, 0, 0), taken(document));
+  const spot = freePlace(document, at, (p) => labelFootprint(net, p));
   const netLabels = { ...document.layout.netLabels, [id]: { ...spot, net } };
   return { document: synced({ ...document, layout: { ...document.layout, netLabels } }), id };
 }
