@@ -127,7 +127,8 @@ describe("drawing on the bench", () => {
     await dropFromTray(page, "jfet", 380, 180);
     await dropFromTray(page, "resistor", 240, 380);
     await dropFromTray(page, "vsource", 620, 120);
-    await dropFromTray(page, "ground", 240, 520);
+    // below and right of the resistor, so its wire to ground leaves its b pin without crossing it
+    await dropFromTray(page, "ground", 400, 520);
     for (const id of ["MIC1", "J1", "R1", "V1"]) await page.getByTestId(`part-${id}`).waitFor();
     // the load dropped onto the supply: it goes to the nearest free grid space instead of covering it
     const supply = await page.getByTestId("part-V1").boundingBox();

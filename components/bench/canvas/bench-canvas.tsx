@@ -22,7 +22,7 @@ import {
 import { type DragEvent, type KeyboardEvent, useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { SimErrorJson } from "@/sim/errors";
 import { PART_KINDS, type PartKind } from "@/sim/circuit/types";
-import { boxCentredOn } from "../document/free-spot";
+import { boxCentredOn, groundCentredOn } from "../document/free-spot";
 import { GRID } from "../document/layout";
 import { nextFreeId } from "../document/ids";
 import { netNames } from "../document/nets";
@@ -183,7 +183,7 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
       if (!kind) return;
       event.preventDefault();
       const at = flow.screenToFlowPosition({ x: event.clientX, y: event.clientY });
-      if (kind === "ground") store.getState().addGround(at);
+      if (kind === "ground") store.getState().addGround(groundCentredOn(at));
       else if (kind === "label") addLabel(at);
       else if ((PART_KINDS as readonly string[]).includes(kind))
         store.getState().addPart(kind as PartKind, boxCentredOn(kind as PartKind, at));

@@ -104,3 +104,8 @@ export function boxCentredOn(kind: BenchPart["kind"], centre: { x: number; y: nu
   const size = rotatedSize(kind, 0);
   return { x: centre.x - size.width / 2, y: centre.y - size.height / 2 };
 }
+
+/** The top-left of the ground symbol centred on `centre`. */
+export function groundCentredOn(centre: { x: number; y: number }): { x: number; y: number } {
+  return { x: centre.x - GROUND_SIZE.width / 2, y: centre.y - GROUND_SIZE.height / 2 };
+}
