@@ -128,7 +128,7 @@ describe("drawing on the bench", () => {
     await dropFromTray(page, "resistor", 240, 380);
     await dropFromTray(page, "vsource", 620, 120);
     // below and right of the resistor, so its wire to ground leaves its b pin without crossing it
-    await dropFromTray(page, "ground", 400, 520);
+    await dropFromTray(page, "ground", 400, 600);
     for (const id of ["MIC1", "J1", "R1", "V1"]) await page.getByTestId(`part-${id}`).waitFor();
     // the load dropped onto the supply: it goes to the nearest free grid space instead of covering it
     const supply = await page.getByTestId("part-V1").boundingBox();
@@ -226,6 +226,9 @@ describe("drawing on the bench", () => {
     await expect(page.getByTestId("value-IN1").textContent()).resolves.toBe("2.2 kΩ");
     await expect(page.getByText("Revision r2").count()).resolves.toBe(1);
     await expect(page.getByTestId("draft-offer").count()).resolves.toBe(0);
+    // the whole bench with its results and plots, to look at
+    await page.locator('[data-testid="bench-results"][data-status="ready"]').waitFor({ timeout: 30_000 });
+    await page.locator('[data-testid="plot-bode"] .js-plotly-plot').waitFor({ timeout: 30_000 });
     await page.screenshot({ path: screenshotPath("bench-saved-desktop"), fullPage: true });
   });
 
