@@ -12,11 +12,17 @@ import { openDocument } from "./document";
 import { emptyLayout, GRID } from "./layout";
 
 const emptyDocument = () =>
-  openDocument({ format: "backplate/circuit", version: 1, parts: [], output: { plus: "0", minus: "0" } }, emptyLayout());
+  openDocument(
+    { format: "backplate/circuit", version: 1, parts: [], output: { plus: "0", minus: "0" } },
+    emptyLayout(),
+  );
 
 /** Boxes apart by at least `gap` on some axis (separating-axis test for axis-aligned boxes). */
 const apart = (a: Rect, b: Rect, gap: number) =>
-  a.x + a.width + gap <= b.x || b.x + b.width + gap <= a.x || a.y + a.height + gap <= b.y || b.y + b.height + gap <= a.y;
+  a.x + a.width + gap <= b.x ||
+  b.x + b.width + gap <= a.x ||
+  a.y + a.height + gap <= b.y ||
+  b.y + b.height + gap <= a.y;
 
 function footprints(store: ReturnType<typeof createBenchStore>): Rect[] {
   const { document } = store.getState();

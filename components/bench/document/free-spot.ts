@@ -57,7 +57,11 @@ export function labelFootprint(net: string, at: { x: number; y: number }): Rect 
 }
 
 /** Every footprint on the canvas. */
-export function occupied(layout: BenchLayout, parts: readonly BenchPart[], parameters: Record<string, RawValue>): Rect[] {
+export function occupied(
+  layout: BenchLayout,
+  parts: readonly BenchPart[],
+  parameters: Record<string, RawValue>,
+): Rect[] {
   const rects: Rect[] = [];
   for (const part of parts) {
     const placement = layout.parts[part.id];
