@@ -6,6 +6,8 @@
  * median of each stage (edit → sent, solve, render, plot). Target: median under 50 ms.
  *   --json              machine-readable output
  *   --profile <file>    also write a Chromium CPU profile (.cpuprofile, opens in the browser's dev tools)
+ *   --trace <file>      also write a Chromium performance trace of the measured changes (JSON; it shows style,
+ *                       layout and paint, which a CPU profile lumps together as "(program)")
  */
 import fs from "node:fs";
 import { chromium } from "playwright-core";
@@ -29,6 +31,8 @@ const args = process.argv.slice(2);
 const json = args.includes("--json");
 const profileAt = args.indexOf("--profile");
 const profileFile = profileAt >= 0 ? args[profileAt + 1] : null;
+const traceAt = args.indexOf("--trace");
+const traceFile = traceAt >= 0 ? args[traceAt + 1] : null;
 const log = (line: string) => {
   if (!json) console.error(line);
 };
@@ -81,7 +85,12 @@ async function main() {
       await cdp.send("Profiler.setSamplingInterval", { interval: 200 });
       await cdp.send("Profiler.start");
     }
+    if (traceFile) await browser.startTracing(page, { path: traceFile, categories: ["devtools.timeline"] });
     for (let i = 0; i < CHANGES; i++) await change(i);
+    if (traceFile) {
+      await browser.stopTracing();
+      log(`Trace written to ${traceFile}`);
+    }
     if (cdp && profileFile) {
       const { profile } = await cdp.send("Profiler.stop");
       fs.writeFileSync(profileFile, JSON.stringify(profile));

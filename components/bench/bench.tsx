@@ -54,6 +54,13 @@ export function Bench(props: BenchProps) {
   );
 }
 
+/** The same error, and the same high nets to the volt (the banner shows them rounded). */
+function sameLiveState(a: BenchLiveState, b: BenchLiveState): boolean {
+  const volts = (nets: Record<string, number> | null) =>
+    nets === null ? null : JSON.stringify(Object.entries(nets).map(([net, v]) => [net, Math.round(v)]));
+  return a.error === b.error && volts(a.highNets) === volts(b.highNets);
+}
+
 function download(name: string, text: string) {
   const url = URL.createObjectURL(new Blob([text], { type: "application/json" }));
   const link = Object.assign(window.document.createElement("a"), { href: url, download: name });
@@ -76,8 +83,13 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
   const draft = useDraft({ designId, parentRevisionId: revision?.id ?? null, document, dirty, enabled: !readOnly });
 
   // the live solve's error and operating point, told by the results below (null until the first solve answers)
-  const [live, setLive] = useState<BenchLiveState>({ error: null, op: null });
-  const onLiveState = useCallback((state: BenchLiveState) => setLive(state), []);
+  const [live, setLive] = useState<BenchLiveState>({ error: null, highNets: null });
+  // kept as it was when neither the error nor the banner's rounded high voltages moved, so a new result does not
+  // re-render the whole bench (the body, the banner, the results' props) after the plots have drawn
+  const onLiveState = useCallback(
+    (state: BenchLiveState) => setLive((was) => (sameLiveState(was, state) ? was : state)),
+    [],
+  );
   const structure = useMemo(() => structureProblem(document.circuit, variant), [document.circuit, variant]);
   const problem = useMemo(
     () => canvasProblem(structure, live.error, document.circuit),
@@ -85,6 +97,21 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
   );
   const selectedPart =
     selection.parts.length === 1 ? document.circuit.parts.find((p) => p.id === selection.parts[0]) : undefined;
+  // stable props for the results, which memo their panels
+  const selectedId = selectedPart?.id;
+  const selectedKind = selectedPart?.kind;
+  const selected = useMemo(
+    () => (selectedId && selectedKind ? { id: selectedId, kind: selectedKind } : null),
+    [selectedId, selectedKind],
+  );
+  const onSelectPart = useCallback((id: string) => store.getState().select({ parts: [id] }), [store]);
+  const onApplyValues = useCallback(
+    (id: string, values: Record<string, string>) => {
+      const part = store.getState().document.circuit.parts.find((p) => p.id === id);
+      if (part) store.getState().updatePart(id, { values: { ...part.values, ...values } });
+    },
+    [store],
+  );
 
   const onImport = (text: string) => {
     const result = importCircuitText(text);
@@ -122,7 +149,7 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
           )
         }
       />
-      <CautionBanner circuit={document.circuit} opNets={live.op?.nets ?? null} />
+      <CautionBanner circuit={document.circuit} opNets={live.highNets} />
       {draft.offer && (
         <div
           className="flex flex-wrap items-center gap-2 border-b border-brass/40 bg-brass-light/40 px-4 py-1.5 text-sm"
@@ -216,16 +243,9 @@ function BenchBody({ readOnly = false, workspaceId, designId, revision: initialR
           document={document}
           variant={variant ?? undefined}
           readOnly={readOnly}
-          selected={selectedPart ? { id: selectedPart.id, kind: selectedPart.kind } : null}
-          onSelectPart={(id) => store.getState().select({ parts: [id] })}
-          onApplyValues={
-            readOnly
-              ? undefined
-              : (id, values) => {
-                  const part = store.getState().document.circuit.parts.find((p) => p.id === id);
-                  if (part) store.getState().updatePart(id, { values: { ...part.values, ...values } });
-                }
-          }
+          selected={selected}
+          onSelectPart={onSelectPart}
+          onApplyValues={readOnly ? undefined : onApplyValues}
           revisions={workspaceId && designId ? { workspaceId, designId } : undefined}
           onLiveState={onLiveState}
         />

@@ -45,6 +45,45 @@ async function wire(page: Page, from: string, to: string) {
   await page.mouse.up();
 }
 
+interface Box {
+  id: string;
+  left: number;
+  top: number;
+  right: number;
+  bottom: number;
+}
+
+/** Each canvas node's box on screen, with everything drawn outside it (the designator and value under a part). */
+async function nodeBoxes(page: Page): Promise<Box[]> {
+  return page.evaluate(() =>
+    [...document.querySelectorAll(".react-flow__node")].map((node) => {
+      const r = node.getBoundingClientRect();
+      const box = { id: node.getAttribute("data-id") ?? "", left: r.left, top: r.top, right: r.right, bottom: r.bottom };
+      for (const inner of node.querySelectorAll("*")) {
+        const e = inner.getBoundingClientRect();
+        if (e.width === 0 && e.height === 0) continue;
+        box.left = Math.min(box.left, e.left);
+        box.top = Math.min(box.top, e.top);
+        box.right = Math.max(box.right, e.right);
+        box.bottom = Math.max(box.bottom, e.bottom);
+      }
+      return box;
+    }),
+  );
+}
+
+/** Pairs of boxes that share any area (axis-aligned boxes are apart when one is wholly beside the other). */
+function overlapping(boxes: Box[]): string[] {
+  const pairs: string[] = [];
+  for (let i = 0; i < boxes.length; i++)
+    for (let j = i + 1; j < boxes.length; j++) {
+      const a = boxes[i];
+      const b = boxes[j];
+      if (a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom) pairs.push(`${a.id} × ${b.id}`);
+    }
+  return pairs;
+}
+
 const pin = (id: string) => `[data-pin="${id}"]`;
 const GROUND = '[data-id="g:g1"] .react-flow__handle';
 
@@ -83,13 +122,25 @@ describe("drawing on the bench", () => {
   });
 
   it("draws capsule, bias resistor, supply, JFET follower and load from the tray and wires them", async () => {
-    await dropFromTray(page, "capsule", 100, 160);
-    await dropFromTray(page, "jfet", 340, 120);
-    await dropFromTray(page, "resistor", 200, 340);
-    await dropFromTray(page, "vsource", 580, 60);
-    await dropFromTray(page, "load", 580, 300);
-    await dropFromTray(page, "ground", 140, 500);
-    for (const id of ["MIC1", "J1", "R1", "V1", "IN1"]) await page.getByTestId(`part-${id}`).waitFor();
+    // each drop lands its part's centre under the pointer, unless that would cover a part already there
+    await dropFromTray(page, "capsule", 120, 200);
+    await dropFromTray(page, "jfet", 380, 180);
+    await dropFromTray(page, "resistor", 240, 380);
+    await dropFromTray(page, "vsource", 620, 120);
+    // below and right of the resistor, so its wire to ground leaves its b pin without crossing it
+    await dropFromTray(page, "ground", 400, 600);
+    for (const id of ["MIC1", "J1", "R1", "V1"]) await page.getByTestId(`part-${id}`).waitFor();
+    // the load dropped onto the supply: it goes to the nearest free grid space instead of covering it
+    const supply = await page.getByTestId("part-V1").boundingBox();
+    await dropFromTray(page, "load", 620, 140);
+    await page.getByTestId("part-IN1").waitFor();
+    const load = await page.getByTestId("part-IN1").boundingBox();
+    expect(supply && load).toBeTruthy();
+    expect(load?.x !== supply?.x || load?.y !== supply?.y).toBe(true);
+    // no two drawn items (with their labels) share any area
+    const boxes = await nodeBoxes(page);
+    expect(boxes).toHaveLength(6);
+    expect(overlapping(boxes), JSON.stringify(boxes)).toEqual([]);
 
     await wire(page, pin("MIC1.diaphragm"), pin("J1.g"));
     await wire(page, pin("R1.a"), pin("J1.g"));
@@ -175,6 +226,9 @@ describe("drawing on the bench", () => {
     await expect(page.getByTestId("value-IN1").textContent()).resolves.toBe("2.2 kΩ");
     await expect(page.getByText("Revision r2").count()).resolves.toBe(1);
     await expect(page.getByTestId("draft-offer").count()).resolves.toBe(0);
+    // the whole bench with its results and plots, to look at
+    await page.locator('[data-testid="bench-results"][data-status="ready"]').waitFor({ timeout: 30_000 });
+    await page.locator('[data-testid="plot-bode"] .js-plotly-plot').waitFor({ timeout: 30_000 });
     await page.screenshot({ path: screenshotPath("bench-saved-desktop"), fullPage: true });
   });
 

@@ -1,7 +1,13 @@
+import { gzipSync } from "node:zlib";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { type Browser, openBrowser, screenshotPath } from "./chromium";
 
 const baseUrl = inject("baseUrl");
+/** Issue 6: the landing page's first-load JavaScript stays under 200 kB gzipped. */
+const FIRST_LOAD_BUDGET_BYTES = 200_000;
+/** the class Plotly gives every graph it draws, and the one React Flow gives its canvas: in their code only */
+const PLOTLY_MARK = "js-plotly-plot";
+const REACT_FLOW_MARK = "react-flow__pane";
 
 describe("landing page in Chromium", () => {
   let browser: Browser;
@@ -38,6 +44,31 @@ describe("landing page in Chromium", () => {
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow).toBeLessThanOrEqual(0);
     await page.screenshot({ path: screenshotPath("landing-phone"), fullPage: true });
+    await page.close();
+  });
+
+  it("loads under 200 kB of gzipped JavaScript on first load, with neither Plotly nor React Flow (issue 6 target)", async () => {
+    // The budget counts every script the landing page fetches, each gzipped here at zlib's default level (what a
+    // server's gzip typically sends); Plotly and React Flow are recognised by class names only their code writes.
+    const page = await browser.context.newPage();
+    const scripts: { url: string; body: Buffer }[] = [];
+    page.on("response", async (response) => {
+      if (response.request().resourceType() !== "script") return;
+      scripts.push({ url: response.url(), body: await response.body() });
+    });
+    await page.goto(baseUrl, { waitUntil: "networkidle" });
+    await page.waitForTimeout(500);
+    expect(scripts.length).toBeGreaterThan(0);
+    const gzippedBytes = scripts.reduce((sum, s) => sum + gzipSync(s.body).length, 0);
+    console.log(
+      `landing first-load JavaScript: ${scripts.length} scripts, ${(gzippedBytes / 1000).toFixed(1)} kB gzipped`,
+    );
+    expect(gzippedBytes).toBeLessThan(FIRST_LOAD_BUDGET_BYTES);
+    for (const s of scripts) {
+      const text = s.body.toString("utf8");
+      expect(text.includes(PLOTLY_MARK), `${s.url} carries Plotly`).toBe(false);
+      expect(text.includes(REACT_FLOW_MARK), `${s.url} carries React Flow`).toBe(false);
+    }
     await page.close();
   });
 

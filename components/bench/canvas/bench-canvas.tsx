@@ -10,6 +10,7 @@ import {
   Background,
   BackgroundVariant,
   type Connection,
+  type Edge,
   ConnectionLineType,
   ConnectionMode,
   Controls,
@@ -21,13 +22,22 @@ import {
 import { type DragEvent, type KeyboardEvent, useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { SimErrorJson } from "@/sim/errors";
 import { PART_KINDS, type PartKind } from "@/sim/circuit/types";
+import { boxCentredOn, groundCentredOn } from "../document/free-spot";
 import { GRID } from "../document/layout";
 import { nextFreeId } from "../document/ids";
 import { netNames } from "../document/nets";
 import { useBench, useBenchStore } from "../store/bench-store-context";
 import type { Selection } from "../store/selection";
 import { CANVAS_ATTRIBUTE, canvasCentre, FOCUS_SHEET_EVENT, KIND_DRAG_TYPE } from "./canvas-centre";
-import { type BenchFlowNode, endpointOfHandle, itemOfNodeId, toFlowEdges, toFlowNodes } from "./flow-model";
+import {
+  type BenchFlowNode,
+  endpointOfHandle,
+  itemOfNodeId,
+  keepUnchangedEdges,
+  keepUnchangedNodes,
+  toFlowEdges,
+  toFlowNodes,
+} from "./flow-model";
 import { GroundNode } from "./ground-node";
 import { HelpOverlay } from "./help-overlay";
 import { LabelNode } from "./label-node";
@@ -77,11 +87,20 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
     return () => observer.disconnect();
   }, [flow]);
 
-  const nodes = useMemo(
-    () => toFlowNodes(document, selection, error, document.circuit.parameters),
-    [document, selection, error],
-  );
-  const edges = useMemo(() => toFlowEdges(document, selection, error), [document, selection, error]);
+  // unchanged nodes and wires keep their objects from the last render (React Flow then leaves them alone)
+  const lastNodes = useRef<BenchFlowNode[]>([]);
+  const lastEdges = useRef<Edge[]>([]);
+  const nodes = useMemo(() => {
+    lastNodes.current = keepUnchangedNodes(
+      lastNodes.current,
+      toFlowNodes(document, selection, error, document.circuit.parameters),
+    );
+    return lastNodes.current;
+  }, [document, selection, error]);
+  const edges = useMemo(() => {
+    lastEdges.current = keepUnchangedEdges(lastEdges.current, toFlowEdges(document, selection, error));
+    return lastEdges.current;
+  }, [document, selection, error]);
 
   const applySelection = useCallback(
     (changes: { id: string; selected: boolean; node: boolean }[]) => {
@@ -164,9 +183,10 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
       if (!kind) return;
       event.preventDefault();
       const at = flow.screenToFlowPosition({ x: event.clientX, y: event.clientY });
-      if (kind === "ground") store.getState().addGround(at);
+      if (kind === "ground") store.getState().addGround(groundCentredOn(at));
       else if (kind === "label") addLabel(at);
-      else if ((PART_KINDS as readonly string[]).includes(kind)) store.getState().addPart(kind as PartKind, at);
+      else if ((PART_KINDS as readonly string[]).includes(kind))
+        store.getState().addPart(kind as PartKind, boxCentredOn(kind as PartKind, at));
     },
     [flow, store, addLabel],
   );

@@ -135,3 +135,49 @@ export function toFlowEdges(document: BenchDocument, selection: Selection, error
     };
   });
 }
+
+const sameRecord = (a: Record<string, unknown>, b: Record<string, unknown>) => {
+  const keys = Object.keys(a);
+  return keys.length === Object.keys(b).length && keys.every((k) => a[k] === b[k]);
+};
+
+/** Same id, type, place, selection, label and data (each data field by identity): the node draws the same. */
+function sameNode(a: BenchFlowNode, b: BenchFlowNode): boolean {
+  return (
+    a.type === b.type &&
+    a.position.x === b.position.x &&
+    a.position.y === b.position.y &&
+    a.selected === b.selected &&
+    a.ariaLabel === b.ariaLabel &&
+    sameRecord(a.data, b.data)
+  );
+}
+
+function sameEdge(a: Edge, b: Edge): boolean {
+  return (
+    a.source === b.source &&
+    a.sourceHandle === b.sourceHandle &&
+    a.target === b.target &&
+    a.targetHandle === b.targetHandle &&
+    a.selected === b.selected &&
+    a.className === b.className &&
+    a.ariaLabel === b.ariaLabel &&
+    (a.data?.net ?? null) === (b.data?.net ?? null)
+  );
+}
+
+/**
+ * `next` with every item that draws the same as in `previous` replaced by the previous object, so a value change
+ * re-renders (and React Flow re-measures) only the nodes and wires it touched, not the whole drawing.
+ */
+function keepUnchanged<T extends { id: string }>(previous: readonly T[], next: T[], same: (a: T, b: T) => boolean): T[] {
+  const before = new Map(previous.map((item) => [item.id, item]));
+  return next.map((item) => {
+    const old = before.get(item.id);
+    return old && same(old, item) ? old : item;
+  });
+}
+
+export const keepUnchangedNodes = (previous: readonly BenchFlowNode[], next: BenchFlowNode[]) =>
+  keepUnchanged(previous, next, sameNode);
+export const keepUnchangedEdges = (previous: readonly Edge[], next: Edge[]) => keepUnchanged(previous, next, sameEdge);

@@ -35,14 +35,22 @@ const baseLayout = {
   font: FONT,
   paper_bgcolor: "rgba(0,0,0,0)",
   plot_bgcolor: "#fbf9f3",
-  margin: { l: 56, r: 16, t: 12, b: 44 },
+  margin: { l: 56, r: 24, t: 12, b: 44 },
   showlegend: true,
   legend: { orientation: "h", y: -0.18, font: { size: 11 } },
   hovermode: "x unified",
   uirevision: "keep",
 };
 
+/**
+ * Tick labels are drawn as they are, never hidden for crossing the plot's edge: Plotly's check for that measures
+ * every label once per label on each redraw, which was a quarter of a Bode update. The margins leave the labels
+ * room (the last frequency label, centred on the right edge, fits in the right margin).
+ */
+const TICK_LABELS = { ticklabeloverflow: "allow" } as const;
+
 const logFrequencyAxis = {
+  ...TICK_LABELS,
   type: "log",
   title: { text: "Frequency (Hz)" },
   gridcolor: PLOT_COLOURS.rule,
@@ -53,8 +61,15 @@ const logFrequencyAxis = {
 export const BODE_LAYOUT = {
   ...baseLayout,
   xaxis: { ...logFrequencyAxis, anchor: "y2" },
-  yaxis: { title: { text: "Magnitude (dB)" }, domain: [0.4, 1], gridcolor: PLOT_COLOURS.rule, zeroline: false },
-  yaxis2: { title: { text: "Phase (°)" }, domain: [0, 0.3], gridcolor: PLOT_COLOURS.rule, zeroline: false, dtick: 90 },
+  yaxis: { ...TICK_LABELS, title: { text: "Magnitude (dB)" }, domain: [0.4, 1], gridcolor: PLOT_COLOURS.rule, zeroline: false },
+  yaxis2: {
+    ...TICK_LABELS,
+    title: { text: "Phase (°)" },
+    domain: [0, 0.3],
+    gridcolor: PLOT_COLOURS.rule,
+    zeroline: false,
+    dtick: 90,
+  },
 };
 
 /**
@@ -78,14 +93,20 @@ type BodeLayout = Omit<typeof BODE_LAYOUT, "xaxis" | "uirevision"> & {
 export const NOISE_LAYOUT = {
   ...baseLayout,
   xaxis: logFrequencyAxis,
-  yaxis: { type: "log", title: { text: "Output noise (V/√Hz)" }, gridcolor: PLOT_COLOURS.rule, exponentformat: "SI" },
+  yaxis: {
+    ...TICK_LABELS,
+    type: "log",
+    title: { text: "Output noise (V/√Hz)" },
+    gridcolor: PLOT_COLOURS.rule,
+    exponentformat: "SI",
+  },
 };
 
 export const IMPEDANCE_LAYOUT = {
   ...baseLayout,
   showlegend: false,
   xaxis: logFrequencyAxis,
-  yaxis: { type: "log", title: { text: "|Zout| (Ω)" }, gridcolor: PLOT_COLOURS.rule, exponentformat: "SI" },
+  yaxis: { ...TICK_LABELS, type: "log", title: { text: "|Zout| (Ω)" }, gridcolor: PLOT_COLOURS.rule, exponentformat: "SI" },
 };
 
 /**

@@ -6,7 +6,7 @@
  * explanation; `onApplyValues` writes a calculator's result into a part (absent or readOnly: no writing).
  */
 import dynamic from "next/dynamic";
-import { useCallback, useEffect, useMemo, useState } from "react";
+import { memo, useCallback, useEffect, useMemo, useState } from "react";
 import type { OpResult } from "@/sim/results";
 import { CalculatorsPanel } from "../calculators/calculators-panel";
 import type { ApplyValues } from "../calculators/capsule-calculator";
@@ -14,6 +14,7 @@ import type { DestinationChoice } from "../destinations/destination-picker";
 import { DestinationPicker } from "../destinations/destination-picker";
 import { DEFAULT_CABLE_LENGTH_M } from "../destinations/presets";
 import type { BenchDocument } from "../document";
+import { ELV_LIMIT_V } from "../document/hazards";
 import { ExplainPanel } from "../explain/explain-panel";
 import { LargeSignalPanel } from "../large-signal/large-signal-panel";
 import { maxSplWords } from "../large-signal/limit-words";
@@ -23,7 +24,7 @@ import { OverlayControls, type RevisionSource } from "../overlays/overlay-contro
 import { type PinnedResult, pinCurve } from "../overlays/pinned";
 import { OVERLAY_COLOURS, PLOT_COLOURS } from "../plots/palette";
 import type { PlotCurve } from "../plots/traces";
-import type { BenchSolveError } from "../solver/protocol";
+import type { BenchSolveError, FamilyResult } from "../solver/protocol";
 import { type CircuitChanges, type OverlayChoice, useLiveSolve } from "../solver/use-live-solve";
 import { useBenchStore } from "../store/bench-store-context";
 import { type CurveRow, CurvesTable } from "./curves-table";
@@ -38,6 +39,14 @@ const PlotsPanel = dynamic(() => import("../plots/plots-panel"), {
     <div className="h-[420px] animate-pulse rounded bg-paper-deep" role="status" aria-label="Loading plots" />
   ),
 });
+
+// A value change renders the results twice (the edit marks them stale, then the result lands): memo keeps the
+// panels whose props did not change (the operating point while solving, the plots until their data changes) from
+// rendering again. Their props are kept stable below for that.
+const Plots = memo(PlotsPanel);
+const Figures = memo(FiguresPanel);
+const OpPanel = memo(OperatingPointPanel);
+const Curves = memo(CurvesTable);
 
 type Tab = "op" | "large" | "overlays" | "measurements" | "explain" | "calculators";
 const TABS: { name: Tab; label: string }[] = [
@@ -67,12 +76,25 @@ export interface BenchResultsProps {
 
 export interface BenchLiveState {
   error: BenchSolveError | null;
-  op: OpResult | null;
+  /** the operating point's nets above the extra-low-voltage limit (null until an operating point has solved) */
+  highNets: Record<string, number> | null;
+}
+
+/** The nets the caution banner names: only these, so a result that moves no high net leaves the banner alone. */
+function highNetsOf(op: OpResult | null): Record<string, number> | null {
+  if (!op) return null;
+  const high: Record<string, number> = {};
+  for (const [net, volts] of Object.entries(op.nets))
+    if (typeof volts === "number" && Math.abs(volts) > ELV_LIMIT_V) high[net] = volts;
+  return high;
 }
 
 const NO_OVERLAYS: OverlayChoice = { variants: [], revisions: [] };
 /** One colour for a measured curve on either plot, apart from the overlay family's. */
 const MEASURED_COLOUR = "#b4410b";
+// one empty list for "no overlay curves", so the curves (and the plot's data) keep their identity across renders:
+// a fresh [] each render rebuilt the Bode traces and made Plotly redraw on every render of the results
+const NO_FAMILY_CURVES: FamilyResult["curves"] = [];
 
 export function BenchResults({
   document,
@@ -116,7 +138,7 @@ export function BenchResults({
   const doc = result?.document;
   const liveOp = doc?.op ?? null;
   useEffect(() => {
-    onLiveState?.({ error: live.error, op: liveOp });
+    onLiveState?.({ error: live.error, highNets: highNetsOf(liveOp) });
   }, [onLiveState, live.error, liveOp]);
 
   const liveCurve = useMemo((): PlotCurve | null => {
@@ -145,7 +167,7 @@ export function BenchResults({
     [measured],
   );
 
-  const familyCurves = family.result?.curves ?? [];
+  const familyCurves = family.result?.curves ?? NO_FAMILY_CURVES;
   const curves = useMemo(() => {
     const list: PlotCurve[] = [];
     if (liveCurve) list.push(liveCurve);
@@ -168,7 +190,7 @@ export function BenchResults({
     return list;
   }, [liveCurve, pinned, measured, familyCurves]);
 
-  const rows: CurveRow[] = [
+  const rows = useMemo((): CurveRow[] => [
     ...(doc
       ? [{ id: "live", label: liveCurve?.label ?? "Design", colour: PLOT_COLOURS.trace, figures: doc.figures }]
       : []),
@@ -190,12 +212,21 @@ export function BenchResults({
       figures: c.figures,
       problem: c.error?.message,
     })),
-  ];
+  ], [doc, liveCurve, pinned, familyCurves]);
 
   const envelope = family.result?.spread?.envelope ?? null;
   const spreadMissing = overlays.spread && family.status === "ready" && !family.result?.spread?.envelope;
   const hasCapsule = document.circuit.parts.some((p) => p.kind === "capsule" && p.enabled);
-  const warnings = [...(doc?.op?.warnings ?? []), ...(doc?.ac?.warnings ?? []), ...(doc?.noise?.warnings ?? [])];
+  const warnings = useMemo(
+    () => [...(doc?.op?.warnings ?? []), ...(doc?.ac?.warnings ?? []), ...(doc?.noise?.warnings ?? [])],
+    [doc],
+  );
+  const splValue = maxSpl?.value ?? "—";
+  const splReason = maxSpl ? (maxSpl.note ?? undefined) : "run the distortion panel (Large signal tab) to find it";
+  const extraRows = useMemo(
+    () => [{ key: "max-spl", label: "Maximum SPL", value: splValue, reason: splReason }],
+    [splValue, splReason],
+  );
 
   return (
     <div
@@ -216,26 +247,19 @@ export function BenchResults({
             )}
           </div>
           {doc ? (
-            <FiguresPanel
+            <Figures
               figures={doc.figures}
               hasCapsule={hasCapsule}
               noiseRan={doc.noise !== undefined}
               stale={live.stale}
-              extraRows={[
-                {
-                  key: "max-spl",
-                  label: "Maximum SPL",
-                  value: maxSpl?.value ?? "—",
-                  reason: maxSpl ? (maxSpl.note ?? undefined) : "run the distortion panel (Large signal tab) to find it",
-                },
-              ]}
+              extraRows={extraRows}
             />
           ) : (
             <p className="text-sm text-ink-soft">
               {live.status === "error" ? "Nothing has solved yet." : "Solving the design…"}
             </p>
           )}
-          {rows.length > 1 && <CurvesTable rows={rows} />}
+          {rows.length > 1 && <Curves rows={rows} />}
           {family.status === "running" && (
             <div className="flex items-center gap-2 text-xs" data-testid="family-progress">
               <progress
@@ -260,7 +284,7 @@ export function BenchResults({
           )}
         </div>
         {doc && result && (
-          <PlotsPanel
+          <Plots
             curves={curves}
             envelope={envelope}
             noise={doc.noise ?? null}
@@ -289,7 +313,7 @@ export function BenchResults({
         <div className="pt-3" role="tabpanel">
           {tab === "op" &&
             (doc?.op ? (
-              <OperatingPointPanel op={doc.op} warnings={warnings} onSelectPart={onSelectPart} />
+              <OpPanel op={doc.op} warnings={warnings} onSelectPart={onSelectPart} />
             ) : (
               <p className="text-sm text-ink-soft">No operating point yet.</p>
             ))}

@@ -129,9 +129,10 @@ export function useLiveSolve(document: BenchDocument | null, options: LiveSolveO
         send();
       });
     };
-    // sent at once when the worker is free (changes within one task collapse into one solve); a change made while a
-    // solve runs waits for it, and only the newest such change is sent
-    queueMicrotask(send);
+    // posted at once when the worker is free, from inside the store's update, so the worker solves while React renders
+    // the edit (a microtask ran only after React's own render of it); a change made while a solve runs waits for it,
+    // and only the newest such change is sent
+    send();
   }).current;
 
   // the store's changes go to the worker as they happen, so the solve runs while React renders the edit

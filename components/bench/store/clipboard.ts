@@ -1,10 +1,12 @@
 /**
  * Copy and paste of parts: the selected parts with their placements, the wires between them and the ground
- * symbols wired to them. Pasted parts get the next free designators and sit one grid step below-right, so the copy
- * is visible; their nets are new (a pasted follower is not wired to the original's nets).
+ * symbols wired to them. Pasted parts get the next free designators; the copy moves as one piece to the nearest free
+ * space below-right of the original (free-spot.ts), so it covers nothing already drawn; its nets are new (a pasted
+ * follower is not wired to the original's nets).
  */
 import type { BenchPart } from "../document/circuit";
 import type { BenchDocument } from "../document/document";
+import { freeShift, groundFootprint, occupied, partFootprint, type Rect } from "../document/free-spot";
 import { nextDesignator, nextFreeId } from "../document/ids";
 import { type Endpoint, GRID, type Placement, type Wire } from "../document/layout";
 import { syncNets } from "../document/nets";
@@ -17,8 +19,30 @@ export interface Clip {
   wires: Wire[];
 }
 
-/** How far a paste lands from the original, canvas units. */
+/** How far below-right of the original a paste is first tried, canvas units. */
 const PASTE_OFFSET = 2 * GRID;
+
+/** The smallest rect holding every footprint of the clip, where it was copied from. */
+function clipBounds(clip: Clip, parameters: BenchDocument["circuit"]["parameters"]): Rect {
+  const rects = [
+    ...clip.parts.map((p) => partFootprint(p, clip.placements[p.id] ?? { x: 0, y: 0, rotation: 0 }, parameters)),
+    ...Object.values(clip.grounds).map(groundFootprint),
+  ];
+  const x = Math.min(...rects.map((r) => r.x));
+  const y = Math.min(...rects.map((r) => r.y));
+  const right = Math.max(...rects.map((r) => r.x + r.width));
+  const bottom = Math.max(...rects.map((r) => r.y + r.height));
+  return { x, y, width: right - x, height: bottom - y };
+}
+
+/** The shift that takes the clip to the nearest free space from one PASTE_OFFSET below-right of where it was. */
+function pasteShift(document: BenchDocument, clip: Clip): { dx: number; dy: number } {
+  const { parts, parameters } = document.circuit;
+  const bounds = clipBounds(clip, parameters);
+  const start = { ...bounds, x: bounds.x + PASTE_OFFSET, y: bounds.y + PASTE_OFFSET };
+  const { dx, dy } = freeShift(start, occupied(document.layout, parts, parameters));
+  return { dx: PASTE_OFFSET + dx, dy: PASTE_OFFSET + dy };
+}
 
 export function copySelection(document: BenchDocument, selection: Selection): Clip | null {
   const ids = new Set(selection.parts);
@@ -57,11 +81,8 @@ export function pasteClip(document: BenchDocument, clip: Clip): { document: Benc
     usedGrounds.push(id);
     groundIds.set(g, id);
   }
-  const moved = <T extends { x: number; y: number }>(at: T): T => ({
-    ...at,
-    x: at.x + PASTE_OFFSET,
-    y: at.y + PASTE_OFFSET,
-  });
+  const { dx, dy } = pasteShift(document, clip);
+  const moved = <T extends { x: number; y: number }>(at: T): T => ({ ...at, x: at.x + dx, y: at.y + dy });
   const mapEnd = (e: Endpoint): Endpoint =>
     e.kind === "pin"
       ? { ...e, part: partIds.get(e.part) as string }

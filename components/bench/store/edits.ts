@@ -7,6 +7,14 @@ import { GROUND, type PartKind } from "@/sim/circuit/types";
 import type { BenchPart, BenchVariant, RawValue } from "../document/circuit";
 import type { BenchDocument } from "../document/document";
 import { nextDesignator, nextFreeId } from "../document/ids";
+import {
+  freeShift,
+  groundFootprint,
+  labelFootprint,
+  occupied,
+  partFootprint,
+  type Rect,
+} from "../document/free-spot";
 import { type Endpoint, endpointKey, GRID, type Placement, type Rotation, type Wire } from "../document/layout";
 import { syncNets } from "../document/nets";
 import { newPart } from "../document/part-defaults";
@@ -27,17 +35,32 @@ function nextWireId(wires: Wire[]): string {
   );
 }
 
+/** What is drawn already, as footprints (a new item keeps clear of them). */
+function taken(document: BenchDocument) {
+  return occupied(document.layout, document.circuit.parts, document.circuit.parameters);
+}
+
+/** `at` snapped, moved on by whole grid steps until `footprintAt(at)` covers nothing drawn. */
+function freePlace(document: BenchDocument, at: { x: number; y: number }, footprintAt: (at: { x: number; y: number }) => Rect) {
+  const snapped = { x: snap(at.x), y: snap(at.y) };
+  const { dx, dy } = freeShift(footprintAt(snapped), taken(document));
+  return { x: snapped.x + dx, y: snapped.y + dy };
+}
+
+/** Adds a part with its box's top-left at `at`, or at the nearest grid point where it covers nothing drawn. */
 export function addPart(document: BenchDocument, kind: PartKind, at: { x: number; y: number }) {
   const id = nextDesignator(
     kind,
     document.circuit.parts.map((p) => p.id),
   );
   const part = newPart(kind, id);
+  const parameters = document.circuit.parameters;
+  const spot = freePlace(document, at, (p) => partFootprint(part, { ...p, rotation: 0 }, parameters));
   const next: BenchDocument = {
     circuit: { ...document.circuit, parts: [...document.circuit.parts, part] },
     layout: {
       ...document.layout,
-      parts: { ...document.layout.parts, [id]: { x: snap(at.x), y: snap(at.y), rotation: 0 } },
+      parts: { ...document.layout.parts, [id]: { ...spot, rotation: 0 } },
     },
   };
   return { document: synced(next), id };
@@ -45,10 +68,11 @@ export function addPart(document: BenchDocument, kind: PartKind, at: { x: number
 
 export function addGround(document: BenchDocument, at: { x: number; y: number }) {
   const id = nextFreeId("g", Object.keys(document.layout.grounds));
+  const spot = freePlace(document, at, groundFootprint);
   return {
     document: {
       ...document,
-      layout: { ...document.layout, grounds: { ...document.layout.grounds, [id]: { x: snap(at.x), y: snap(at.y) } } },
+      layout: { ...document.layout, grounds: { ...document.layout.grounds, [id]: spot } },
     },
     id,
   };
@@ -56,7 +80,8 @@ export function addGround(document: BenchDocument, at: { x: number; y: number })
 
 export function addNetLabel(document: BenchDocument, at: { x: number; y: number }, net: string) {
   const id = nextFreeId("n", Object.keys(document.layout.netLabels));
-  const netLabels = { ...document.layout.netLabels, [id]: { x: snap(at.x), y: snap(at.y), net } };
+  const spot = freePlace(document, at, (p) => labelFootprint(net, p));
+  const netLabels = { ...document.layout.netLabels, [id]: { ...spot, net } };
   return { document: synced({ ...document, layout: { ...document.layout, netLabels } }), id };
 }
 

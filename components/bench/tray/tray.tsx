@@ -5,6 +5,7 @@
  */
 import { useReactFlow } from "@xyflow/react";
 import type { PartKind } from "@/sim/circuit/types";
+import { boxCentredOn } from "../document/free-spot";
 import { nextFreeId } from "../document/ids";
 import { netNames } from "../document/nets";
 import { canvasCentre, KIND_DRAG_TYPE } from "../canvas/canvas-centre";
@@ -50,11 +51,8 @@ export function Tray() {
     const state = store.getState();
     if (item === "ground") state.addGround(at);
     else if (item === "label") state.addNetLabel(at, nextFreeId("net", netNames(state.document.circuit)));
-    else {
-      // stagger repeated clicks so new parts do not land on top of each other
-      const count = state.document.circuit.parts.length % 5;
-      state.addPart(item, { x: at.x - 60 + count * 40, y: at.y - 30 + count * 40 });
-    }
+    // a part already there pushes the new one to the nearest free grid space (edits.addPart)
+    else state.addPart(item, boxCentredOn(item, at));
   };
 
   return (
