@@ -221,6 +221,24 @@ describe("bench live results in Chromium", () => {
     const overflow = await phone.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow).toBeLessThanOrEqual(0);
     await phone.screenshot({ path: screenshotPath("bench-results-phone"), fullPage: true });
+    // The fitted drawing is whole on the phone's canvas (an overview; pinch or + to read it).
+    const fit = await phone.evaluate(() => {
+      const pane = document.querySelector(".react-flow")!.getBoundingClientRect();
+      const transform = getComputedStyle(document.querySelector(".react-flow__viewport")!).transform;
+      const zoom = new DOMMatrix(transform).a;
+      const cut = [...document.querySelectorAll(".react-flow__node")].filter((node) => {
+        const box = node.getBoundingClientRect();
+        return (
+          box.left < pane.left - 1 ||
+          box.right > pane.right + 1 ||
+          box.top < pane.top - 1 ||
+          box.bottom > pane.bottom + 1
+        );
+      });
+      return { zoom, cut: cut.map((node) => node.getAttribute("data-id")) };
+    });
+    expect(fit.cut).toEqual([]);
+    expect(fit.zoom).toBeGreaterThan(0.2);
     await phone.close();
   });
 });

@@ -48,6 +48,22 @@ const NODE_TYPES = { part: PartNode, ground: GroundNode, netLabel: LabelNode };
 // minZoom: a fitted drawing never shrinks its 10 px value labels below 9 px on screen (a large circuit is then
 // fitted as far as it stays readable, and panned for the rest)
 const FIT_OPTIONS = { padding: 0.2, maxZoom: 1.4, minZoom: 0.9 };
+/**
+ * Below this canvas width (a phone, read-only use) the whole drawing is fitted with a narrow margin even when that
+ * takes it below the readable zoom: a phone user first needs to see the whole circuit, then pinches or taps + to
+ * read a part (the part values are also listed, readable, under the operating point).
+ */
+const NARROW_CANVAS_PX = 640;
+const NARROW_FIT_OPTIONS = { ...FIT_OPTIONS, padding: 0.05, minZoom: 0.2 };
+
+/** The fit for a canvas this wide (px). */
+function fitOptionsFor(width: number) {
+  return width > 0 && width < NARROW_CANVAS_PX ? NARROW_FIT_OPTIONS : FIT_OPTIONS;
+}
+
+function canvasWidth(): number {
+  return typeof window === "undefined" ? 0 : window.innerWidth;
+}
 /** The canvas is fitted again when its width changes by more than this share (a phone turned, a window snapped). */
 const REFIT_WIDTH_CHANGE = 0.25;
 
@@ -80,7 +96,7 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
       }
       if (Math.abs(width - fittedWidth) / fittedWidth > REFIT_WIDTH_CHANGE) {
         fittedWidth = width;
-        requestAnimationFrame(() => flow.fitView(FIT_OPTIONS));
+        requestAnimationFrame(() => flow.fitView(fitOptionsFor(width)));
       }
     });
     observer.observe(element);
@@ -216,7 +232,7 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
         state.clearSelection();
         break;
       case "fit":
-        flow.fitView(FIT_OPTIONS);
+        flow.fitView(fitOptionsFor(canvasWidth()));
         break;
       case "rotate":
         state.rotatePart();
@@ -291,7 +307,7 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
         selectionKeyCode="Shift"
         multiSelectionKeyCode={["Shift", "Meta", "Control"]}
         fitView
-        fitViewOptions={FIT_OPTIONS}
+        fitViewOptions={fitOptionsFor(canvasWidth())}
         minZoom={0.2}
         maxZoom={3}
         proOptions={{ hideAttribution: true }}
