@@ -165,6 +165,18 @@ describe("bench live results in Chromium", () => {
     await expect.poll(() => bodeTraceCount(page)).toBe(2);
   });
 
+  it("keeps a parameter field focused after Enter and shows the earlier value after Undo", async () => {
+    const input = page.getByLabel("parameter RS", { exact: true });
+    const before = await input.inputValue();
+    await setParameter(page, "RS", "8k2");
+    // the row stays the same element, so the caret stays where the person typed
+    await expect(input.evaluate((el) => el === document.activeElement)).resolves.toBe(true);
+    await page.getByRole("button", { name: "Undo" }).click();
+    await expect.poll(() => input.inputValue()).toBe(before);
+    await page.getByRole("button", { name: "Redo" }).click();
+    await expect.poll(() => input.inputValue()).toBe("8k2");
+  });
+
   it(`brings each of ${CHANGES_MEASURED} value changes to the plots and records the durations`, async () => {
     await page.evaluate(() => {
       window.__benchUpdateDurations = [];

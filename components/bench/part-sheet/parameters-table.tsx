@@ -4,7 +4,7 @@
  * add row is a react-hook-form with the same zod schema (a valid name, a value that evaluates, no cycle).
  */
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import { useForm } from "react-hook-form";
 import { parameterSchema } from "@/components/schemas/bench-part";
 import { evaluateParameters } from "@/sim/circuit/parameters";
@@ -14,11 +14,30 @@ import { formatSI } from "../symbols/format-si";
 const inputClass =
   "w-full rounded border border-rule bg-white/80 px-1.5 py-0.5 font-mono text-xs text-ink outline-none focus:border-brass aria-[invalid=true]:border-caution";
 
-function ParameterRow({ name, raw, parameters }: { name: string; raw: string; parameters: Record<string, number | string> }) {
+function ParameterRow({
+  name,
+  raw,
+  shown,
+  parameters,
+}: {
+  name: string;
+  raw: string;
+  /** the evaluated value in SI, or "" when it does not evaluate */
+  shown: string;
+  parameters: Record<string, number | string>;
+}) {
   const store = useBenchStore();
   const readOnly = useBench((s) => s.readOnly);
   const [text, setText] = useState(raw);
   const [problem, setProblem] = useState<string | null>(null);
+  // The row is keyed by name, so it stays (and keeps focus) when its own value is saved; a value changed from
+  // elsewhere (undo, redo, a calculator) is taken into the field during render, React's pattern for derived state.
+  const [shownRaw, setShownRaw] = useState(raw);
+  if (raw !== shownRaw) {
+    setShownRaw(raw);
+    setText(raw);
+    setProblem(null);
+  }
   const save = () => {
     if (text === raw) return setProblem(null);
     const result = parameterSchema(parameters, name).safeParse({ name, value: text });
@@ -26,12 +45,6 @@ function ParameterRow({ name, raw, parameters }: { name: string; raw: string; pa
     setProblem(null);
     store.getState().setParameter(name, text.trim());
   };
-  let shown = "";
-  try {
-    shown = formatSI(evaluateParameters(parameters)[name]);
-  } catch {
-    shown = "";
-  }
   return (
     <tr className="border-t border-rule align-top">
       <td className="py-1 pr-2 font-mono text-xs">{name}</td>
@@ -65,10 +78,22 @@ function ParameterRow({ name, raw, parameters }: { name: string; raw: string; pa
   );
 }
 
+/** Each parameter's value in SI; a set that does not evaluate (a cycle, a bad expression) shows none. */
+function shownValues(parameters: Record<string, number | string>): Record<string, string> {
+  try {
+    const values = evaluateParameters(parameters);
+    return Object.fromEntries(Object.keys(parameters).map((name) => [name, formatSI(values[name])]));
+  } catch {
+    return {};
+  }
+}
+
 export function ParametersTable() {
   const store = useBenchStore();
   const readOnly = useBench((s) => s.readOnly);
   const parameters = useBench((s) => s.document.circuit.parameters);
+  // evaluated once for all rows (each row used to evaluate the whole set again)
+  const shown = useMemo(() => shownValues(parameters), [parameters]);
   const form = useForm<{ name: string; value: string }>({
     resolver: zodResolver(parameterSchema(parameters)),
     defaultValues: { name: "", value: "" },
@@ -83,7 +108,7 @@ export function ParametersTable() {
       <table className="w-full">
         <tbody>
           {Object.entries(parameters).map(([name, raw]) => (
-            <ParameterRow key={`${name}:${raw}`} name={name} raw={String(raw)} parameters={parameters} />
+            <ParameterRow key={name} name={name} raw={String(raw)} shown={shown[name] ?? ""} parameters={parameters} />
           ))}
         </tbody>
       </table>
@@ -94,7 +119,12 @@ export function ParametersTable() {
             <input aria-label="new parameter name" placeholder="RB" className={inputClass} {...form.register("name")} />
           </div>
           <div className="flex-1">
-            <input aria-label="new parameter value" placeholder="1G" className={inputClass} {...form.register("value")} />
+            <input
+              aria-label="new parameter value"
+              placeholder="1G"
+              className={inputClass}
+              {...form.register("value")}
+            />
           </div>
           <button type="submit" className="rounded border border-rule px-2 py-0.5 text-xs hover:bg-paper-deep">
             Add
