@@ -11,9 +11,9 @@
  */
 import type { AcStampContext, NoiseGenerator } from "../devices/device";
 import { ComplexSystem } from "../mna/complex-system";
-import { type OutputPlan, SparseLuComplexLanes, SWEEP_LANES } from "../mna/sparse-lu-complex-lanes";
 import { DISCARDED_HANDLE, PatternBuilder } from "../mna/pattern";
 import { SingularMatrixError } from "../mna/singular";
+import { type OutputPlan, SparseLuComplexLanes, SWEEP_LANES } from "../mna/sparse-lu-complex-lanes";
 import { compileSparseStructure, type SparseStructure } from "../mna/sparse-structure";
 import { type CompiledCircuit, singularCircuitError } from "./compile";
 import type { OperatingPoint } from "./op";
@@ -60,12 +60,9 @@ export function transposedStructure(compiled: CompiledCircuit): TransposedStruct
   const n = original.size;
   const laneRhsRe = new Float64Array((n + 1) * SWEEP_LANES);
   const laneRhsIm = new Float64Array((n + 1) * SWEEP_LANES);
-  const plus = compiled.netIndex.get(compiled.circuit.output.plus) ?? -1;
-  const minus = compiled.netIndex.get(compiled.circuit.output.minus) ?? -1;
-  for (let b = 0; b < SWEEP_LANES; b++) {
-    if (plus >= 0) laneRhsRe[plus * SWEEP_LANES + b] += 1;
-    if (minus >= 0) laneRhsRe[minus * SWEEP_LANES + b] -= 1;
-  }
+  const single = outputSelector(compiled);
+  for (let row = 0; row < n; row++)
+    for (let b = 0; b < SWEEP_LANES; b++) laneRhsRe[row * SWEEP_LANES + b] = single[row];
   const lanes = new SparseLuComplexLanes(structure);
   const built = { structure, positionOfHandle, lanes, laneRhsRe, laneRhsIm, plans: new Map() };
   transposedCache.set(compiled, built);
@@ -112,13 +109,8 @@ export class AdjointNoiseSystem {
     for (const d of compiled.devices) d.stampAc(ctx);
     const view = { x: op.x, thermalVoltage: op.thermalVoltage, temperature: op.temperature };
     this.generators = compiled.devices.flatMap((d) => d.noiseSources(view));
-    // e_out: +1 at the output's plus net, −1 at its minus net (ground rows dropped); slot n is the ground scratch.
-    this.rhsRe = new Float64Array(n + 1);
+    this.rhsRe = outputSelector(compiled);
     this.rhsIm = new Float64Array(n + 1);
-    const plus = compiled.netIndex.get(compiled.circuit.output.plus) ?? -1;
-    const minus = compiled.netIndex.get(compiled.circuit.output.minus) ?? -1;
-    if (plus >= 0) this.rhsRe[plus] += 1;
-    if (minus >= 0) this.rhsRe[minus] -= 1;
     this.yRe = new Float64Array(n);
     this.yIm = new Float64Array(n);
     this.lanes = transposed.lanes;
@@ -187,4 +179,17 @@ function generatorPlan(transposed: TransposedStructure, generators: readonly Noi
     transposed.plans.set(key, plan);
   }
   return plan;
+}
+
+/**
+ * e_out: +1 at the output's plus net, −1 at its minus net (ground rows dropped), by unknown; slot n is the ground
+ * scratch row.
+ */
+function outputSelector(compiled: CompiledCircuit): Float64Array {
+  const e = new Float64Array(compiled.unknowns.length + 1);
+  const plus = compiled.netIndex.get(compiled.circuit.output.plus) ?? -1;
+  const minus = compiled.netIndex.get(compiled.circuit.output.minus) ?? -1;
+  if (plus >= 0) e[plus] += 1;
+  if (minus >= 0) e[minus] -= 1;
+  return e;
 }

@@ -26,8 +26,8 @@ import type { Device } from "../devices/device";
 import { DenseLuComplex } from "../mna/dense-lu";
 import { type OrderedLuPlan, planOrderedLu } from "../mna/ordered-lu";
 import { OrderedLuLanes } from "../mna/ordered-lu-lanes";
-import { SWEEP_LANES } from "../mna/sparse-lu-complex-lanes";
 import { SingularMatrixError } from "../mna/singular";
+import { SWEEP_LANES } from "../mna/sparse-lu-complex-lanes";
 import type { SparseStructure } from "../mna/sparse-structure";
 import { type ComplexValue, DriveContext, type SmallSignalModel } from "./small-signal";
 

@@ -22,8 +22,15 @@ import { SmallSignalModel } from "../analyses/small-signal";
 import { elaborate } from "../circuit/elaborate";
 import type { ElaboratedCircuit } from "../circuit/types";
 import { prepareDense, prepareMathjs } from "./baselines";
-import { largeSignalCases, TARGET_MAX_SPL_MS, TARGET_TRANSIENT_MS } from "./large-signal";
-import { noiseCase, SPREAD_RUNS, spreadCase, TARGET_NOISE_MS, TARGET_SPREAD_MS } from "./noise-spread";
+import { type LargeSignalBenchCase, largeSignalCases, TARGET_MAX_SPL_MS, TARGET_TRANSIENT_MS } from "./large-signal";
+import {
+  type ExtraBenchCase,
+  noiseCase,
+  SPREAD_RUNS,
+  spreadCase,
+  TARGET_NOISE_MS,
+  TARGET_SPREAD_MS,
+} from "./noise-spread";
 import { rcLadder } from "./rc-ladder";
 import { medianMs, timeMs } from "./timing";
 
@@ -162,7 +169,8 @@ const CASES: Record<string, () => BenchCase | ExtraRow | ExtraRow[]> = {
   "large-signal": () => largeSignalCases(demoCircuit()).map((c) => ({ ...c, mathjs_median_ms: null, ratio: null })),
 };
 
-type ExtraRow = { name: string; nets: number; points: number; median_ms: number; note: string };
+/** the noise, spread and large-signal rows: no dense or mathjs columns */
+type ExtraRow = ExtraBenchCase | LargeSignalBenchCase;
 
 /** Run one case in a fresh child process (same loader and flags) and take its result. */
 function runIsolated(name: string): Promise<BenchCase | ExtraRow | ExtraRow[]> {
