@@ -1,10 +1,9 @@
 import type { Metadata, Viewport } from "next";
-import { getServerSession } from "next-auth";
 import type { ReactNode } from "react";
 import { Providers } from "@/components/providers";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { SiteHeader } from "@/components/shell/site-header";
-import { requestAuthOptions } from "./_server/auth-options";
+import { requestSessionToken } from "./_server/session-cookie";
 import { displayFont, monoFont, textFont } from "./fonts";
 import "./globals.css";
 
@@ -18,8 +17,8 @@ export const viewport: Viewport = { width: "device-width", initialScale: 1, them
 
 export default async function RootLayout({ children }: { children: ReactNode }) {
   // Reads the signed cookie only (no database), so the header's first paint knows whether someone is signed in.
-  const session = await getServerSession(await requestAuthOptions());
-  const serverUser = session?.user ? { name: session.user.name, email: session.user.email } : null;
+  const token = await requestSessionToken();
+  const serverUser = token?.sub ? { name: token.name ?? null, email: token.email ?? null } : null;
   return (
     <html lang="en" className={`${displayFont.variable} ${textFont.variable} ${monoFont.variable}`}>
       <body className="flex min-h-screen flex-col">

@@ -48,9 +48,10 @@ const summaryColumns = {
   deletedAt: designs.deletedAt,
 };
 
+/** The designs list's rows, and its total as a window count (so a page is one round trip). */
 function summaryQuery() {
   return getDb()
-    .select(summaryColumns)
+    .select({ ...summaryColumns, total: sql<number>`count(*) over ()`.mapWith(Number) })
     .from(designs)
     .innerJoin(creator, eq(creator.id, designs.createdBy))
     .leftJoin(head, eq(head.id, designs.headRevisionId))
@@ -92,12 +93,15 @@ export async function listDesigns(workspaceId: string, query: ListDesignsQuery):
   }
   const condition = and(...where);
   const order = query.dir === "asc" ? asc : desc;
-  const rows = await summaryQuery()
+  const found = await summaryQuery()
     .where(condition)
     .orderBy(order(SORT_COLUMNS[query.sort]), asc(designs.id))
     .limit(query.pageSize)
     .offset((query.page - 1) * query.pageSize);
-  const [{ total }] = await getDb().select({ total: sql<number>`count(*)::int` }).from(designs).where(condition);
+  // only a page past the end has no row to carry the total
+  const total =
+    found.length > 0 ? found[0].total : (await getDb().select({ total: sql<number>`count(*)::int` }).from(designs).where(condition))[0].total;
+  const rows = found.map(({ total: _, ...row }) => row);
   return { rows, total, page: query.page, pageSize: query.pageSize };
 }
 

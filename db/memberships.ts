@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import type { Role } from "@/components/auth/roles";
 import { getDb } from "./client";
-import { memberships, workspaces } from "./schema";
+import { memberships, users, workspaces } from "./schema";
 
 export interface WorkspaceMembership {
   workspaceId: string;
@@ -30,6 +30,41 @@ export async function getMembership(workspaceId: string, userId: string): Promis
     .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)))
     .limit(1);
   return rows[0] ?? null;
+}
+
+/**
+ * A person and their membership of one workspace in one round trip (every API request asks both): null when the
+ * person no longer exists; `membership` null when they are not a member.
+ */
+export async function getUserWithMembership(
+  userId: string,
+  workspaceId: string,
+): Promise<{ user: { id: string; email: string; name: string | null }; membership: WorkspaceMembership | null } | null> {
+  const rows = await getDb()
+    .select({
+      id: users.id,
+      email: users.email,
+      name: users.name,
+      workspaceId: workspaces.id,
+      slug: workspaces.slug,
+      workspaceName: workspaces.name,
+      role: memberships.role,
+      allowPublicLinks: workspaces.allowPublicLinks,
+      allowSelfApproval: workspaces.allowSelfApproval,
+    })
+    .from(users)
+    .leftJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.workspaceId, workspaceId)))
+    .leftJoin(workspaces, eq(workspaces.id, memberships.workspaceId))
+    .where(eq(users.id, userId))
+    .limit(1);
+  const row = rows[0];
+  if (!row) return null;
+  const { id, email, name, workspaceId: memberOf, slug, workspaceName, role, allowPublicLinks, allowSelfApproval } = row;
+  const membership =
+    memberOf && slug && workspaceName && role && allowPublicLinks !== null && allowSelfApproval !== null
+      ? { workspaceId: memberOf, slug, name: workspaceName, role, allowPublicLinks, allowSelfApproval }
+      : null;
+  return { user: { id, email, name }, membership };
 }
 
 export async function getMembershipBySlug(slug: string, userId: string): Promise<WorkspaceMembership | null> {

@@ -2,7 +2,8 @@
  * `npm run loadtest`: throwaway services, the demo seed, the built app (the app tests' build, rebuilt only when the
  * sources changed) on 127.0.0.1, then the scenarios of scripts/lib/loadtest.ts in their full form. Prints each
  * scenario's throughput, latency and errors, writes tests/output/loadtest.json, and exits 1 when a target is missed.
- * Options: --connections N (50), --duration S (10 per read scenario), --rounds N (20), --writers N (20).
+ * Options: --connections N (50), --duration S (10 per read scenario), --rounds N (20), --writers N (20),
+ * --profile DIR (the server writes a V8 CPU profile there when it stops; open it in Chromium's dev tools).
  */
 import fs from "node:fs";
 import path from "node:path";
@@ -21,6 +22,14 @@ function option(name: string, fallback: number): number {
   if (at < 0) return fallback;
   const value = Number(process.argv[at + 1]);
   if (!Number.isInteger(value) || value < 1) throw new Error(`--${name} needs a whole number of 1 or more, such as --${name} ${fallback}.`);
+  return value;
+}
+
+function textOption(name: string): string | undefined {
+  const at = process.argv.indexOf(`--${name}`);
+  if (at < 0) return undefined;
+  const value = process.argv[at + 1];
+  if (!value || value.startsWith("--")) throw new Error(`--${name} needs a value, such as --${name} tests/output/profile.`);
   return value;
 }
 
@@ -52,7 +61,13 @@ async function main() {
   try {
     await seedDemo(services.databaseUrl);
     buildIfStale(distDir, log);
-    const server = await startAppServer({ distDir, env: services.env, secret: "loadtest-secret-not-for-production" });
+    const profileDir = textOption("profile");
+    const server = await startAppServer({
+      distDir,
+      env: services.env,
+      secret: "loadtest-secret-not-for-production",
+      nodeFlags: profileDir ? ["--cpu-prof", `--cpu-prof-dir=${path.resolve(profileDir)}`] : [],
+    });
     try {
       log(`app at ${server.baseUrl}; ${JSON.stringify(options)}`);
       const report = await runLoadtest({ ...options, baseUrl: server.baseUrl, databaseUrl: services.databaseUrl }, log);

@@ -1,21 +1,23 @@
 import "server-only";
-import { getServerSession } from "next-auth";
+import { cache } from "react";
 import { type Action, can } from "@/components/auth/roles";
 import { AppError } from "@/db/errors";
-import { getMembership, type WorkspaceMembership } from "@/db/memberships";
+import { getUserWithMembership, type WorkspaceMembership } from "@/db/memberships";
 import { getUserById, type UserRow } from "@/db/users";
-import { requestAuthOptions } from "./auth-options";
+import { requestSessionToken } from "./session-cookie";
 
 export type SessionUser = Pick<UserRow, "id" | "email" | "name">;
 
-/** The signed-in person, or null. Reads the signed session cookie, then the user row (so a deleted user is out). */
-export async function getSessionUser(): Promise<SessionUser | null> {
-  const session = await getServerSession(await requestAuthOptions());
-  const id = (session?.user as { id?: string } | undefined)?.id;
+/**
+ * The signed-in person, or null. Reads the signed session cookie, then the user row (so a deleted user is out);
+ * once per request, however many server components and checks ask.
+ */
+export const getSessionUser = cache(async (): Promise<SessionUser | null> => {
+  const id = (await requestSessionToken())?.sub;
   if (!id) return null;
   const user = await getUserById(id);
   return user ? { id: user.id, email: user.email, name: user.name } : null;
-}
+});
 
 export async function requireUser(): Promise<SessionUser> {
   const user = await getSessionUser();
@@ -31,8 +33,10 @@ export async function requireAction(
   workspaceId: string,
   action: Action,
 ): Promise<{ user: SessionUser; membership: WorkspaceMembership }> {
-  const user = await requireUser();
-  const membership = await getMembership(workspaceId, user.id);
+  const id = (await requestSessionToken())?.sub;
+  const found = id ? await getUserWithMembership(id, workspaceId) : null;
+  if (!found) throw new AppError("unauthenticated", "Sign in to continue.");
+  const { user, membership } = found;
   if (!membership) throw new AppError("not_found", "No such workspace, or you are not a member of it.");
   if (!can(membership.role, action)) {
     throw new AppError("forbidden", `Your role (${membership.role}) does not allow this (${action}). Ask an owner.`);

@@ -33,10 +33,18 @@ async function waitForHealth(url: string, server: ChildProcess) {
 }
 
 /** `env` holds the services' variables (DATABASE_URL, SMTP_URL, S3_*) and anything else the server should see. */
-export async function startAppServer(options: { distDir: string; env: Record<string, string>; secret: string }): Promise<AppServer> {
+export async function startAppServer(options: {
+  distDir: string;
+  env: Record<string, string>;
+  secret: string;
+  /** extra Node.js flags for the server process (e.g. `--cpu-prof`, for `npm run loadtest -- --profile`) */
+  nodeFlags?: string[];
+}): Promise<AppServer> {
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
-  const server = spawn(path.join(PROJECT_ROOT, "node_modules", ".bin", "next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+  const nextBin = path.join(PROJECT_ROOT, "node_modules", "next", "dist", "bin", "next");
+  const args = [...(options.nodeFlags ?? []), nextBin, "start", "-H", "127.0.0.1", "-p", String(port)];
+  const server = spawn(process.execPath, args, {
     cwd: PROJECT_ROOT,
     stdio: ["ignore", "pipe", "pipe"],
     env: {
