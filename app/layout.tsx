@@ -11,6 +11,8 @@ export const metadata: Metadata = {
   title: { default: "Backplate", template: "%s · Backplate" },
   description:
     "Design, simulate and review condenser-microphone front ends: response into real loads, sensitivity, self-noise, spread.",
+  // served from public/, so browsers stop asking for a /favicon.ico that does not exist
+  icons: { icon: { url: "/backplate-mark.svg", type: "image/svg+xml" } },
 };
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#15181c" };

@@ -79,4 +79,23 @@ describe("landing page in Chromium", () => {
     expect(body.status).toBe("ok");
     expect(body.database.roundTripMs).toBeGreaterThanOrEqual(0);
   });
+
+  it("names its icon and serves it and robots.txt from public/ (no request for a missing /favicon.ico)", async () => {
+    const page = await browser.context.newPage();
+    const missing: string[] = [];
+    page.on("response", (response) => {
+      if (response.status() >= 400) missing.push(`${response.status()} ${response.url()}`);
+    });
+    await page.goto(`${baseUrl}/`);
+    const icon = await page.locator('link[rel="icon"]').getAttribute("href");
+    expect(icon).toMatch(/^\/backplate-mark\.svg/);
+    const served = await fetch(`${baseUrl}${icon}`);
+    expect(served.status).toBe(200);
+    expect(served.headers.get("content-type")).toContain("image/svg+xml");
+    const robots = await fetch(`${baseUrl}/robots.txt`);
+    expect(robots.status).toBe(200);
+    expect(await robots.text()).toContain("Disallow: /");
+    expect(missing).toEqual([]);
+    await page.close();
+  });
 });

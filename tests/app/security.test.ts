@@ -200,8 +200,6 @@ describe("the bench under the policy, in Chromium", () => {
     // Every console error counts, not only the policy's own reports: a script refused by the policy can surface as
     // a failed chunk load or an uncaught EvalError instead.
     page.on("console", (message) => {
-      // the browser's own favicon probe (Backplate has no /favicon.ico) is not the page's doing
-      if (message.location().url.endsWith("/favicon.ico")) return;
       if (message.type() === "error" || /Content Security Policy|Refused to/i.test(message.text())) reported.push(`console ${message.type()}: ${message.text()} (${message.location().url})`);
     });
     page.on("pageerror", (error) => reported.push(`uncaught: ${error.message}`));
