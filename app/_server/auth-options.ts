@@ -2,7 +2,6 @@ import "server-only";
 import bcrypt from "bcryptjs";
 import { DrizzleAdapter } from "@auth/drizzle-adapter";
 import type { NextAuthOptions } from "next-auth";
-import { headers } from "next/headers";
 import type { Adapter } from "next-auth/adapters";
 import CredentialsProvider from "next-auth/providers/credentials";
 import EmailProvider from "next-auth/providers/email";
@@ -105,9 +104,4 @@ export const authOptions: NextAuthOptions = {
  */
 export function authOptionsFor(requestHeaders: Pick<Headers, "get">): NextAuthOptions {
   return { ...authOptions, useSecureCookies: servedOverHttps(requestHeaders.get("x-forwarded-proto"), process.env.NEXTAUTH_URL) };
-}
-
-/** authOptionsFor() of the request being rendered or handled (server components, route handlers). */
-export async function requestAuthOptions(): Promise<NextAuthOptions> {
-  return authOptionsFor(await headers());
 }
