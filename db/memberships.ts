@@ -33,14 +33,14 @@ export async function getMembership(workspaceId: string, userId: string): Promis
 }
 
 /**
- * A person and their membership of one workspace in one round trip (every API request asks both): null when the
- * person no longer exists; `membership` null when they are not a member.
+ * A person and their membership of one workspace, found by id or by slug, in one round trip (every API request and
+ * workspace page asks both): null when the person no longer exists; `membership` null when they are not a member.
  */
 export async function getUserWithMembership(
   userId: string,
-  workspaceId: string,
+  workspace: { id: string } | { slug: string },
 ): Promise<{ user: { id: string; email: string; name: string | null }; membership: WorkspaceMembership | null } | null> {
-  const rows = await getDb()
+  const query = getDb()
     .select({
       id: users.id,
       email: users.email,
@@ -52,17 +52,23 @@ export async function getUserWithMembership(
       allowPublicLinks: workspaces.allowPublicLinks,
       allowSelfApproval: workspaces.allowSelfApproval,
     })
-    .from(users)
-    .leftJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.workspaceId, workspaceId)))
-    .leftJoin(workspaces, eq(workspaces.id, memberships.workspaceId))
-    .where(eq(users.id, userId))
-    .limit(1);
+    .from(users);
+  const joined =
+    "id" in workspace
+      ? query
+          .leftJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.workspaceId, workspace.id)))
+          .leftJoin(workspaces, eq(workspaces.id, memberships.workspaceId))
+      : query
+          .leftJoin(workspaces, eq(workspaces.slug, workspace.slug))
+          .leftJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.workspaceId, workspaces.id)));
+  const rows = await joined.where(eq(users.id, userId)).limit(1);
   const row = rows[0];
   if (!row) return null;
-  const { id, email, name, workspaceId: memberOf, slug, workspaceName, role, allowPublicLinks, allowSelfApproval } = row;
+  const { id, email, name, workspaceId, slug, workspaceName, role, allowPublicLinks, allowSelfApproval } = row;
+  // a workspace without the person's membership (found by slug) is no membership
   const membership =
-    memberOf && slug && workspaceName && role && allowPublicLinks !== null && allowSelfApproval !== null
-      ? { workspaceId: memberOf, slug, name: workspaceName, role, allowPublicLinks, allowSelfApproval }
+    workspaceId && slug && workspaceName && role && allowPublicLinks !== null && allowSelfApproval !== null
+      ? { workspaceId, slug, name: workspaceName, role, allowPublicLinks, allowSelfApproval }
       : null;
   return { user: { id, email, name }, membership };
 }

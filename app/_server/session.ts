@@ -34,7 +34,7 @@ export async function requireAction(
   action: Action,
 ): Promise<{ user: SessionUser; membership: WorkspaceMembership }> {
   const id = (await requestSessionToken())?.sub;
-  const found = id ? await getUserWithMembership(id, workspaceId) : null;
+  const found = id ? await getUserWithMembership(id, { id: workspaceId }) : null;
   if (!found) throw new AppError("unauthenticated", "Sign in to continue.");
   const { user, membership } = found;
   if (!membership) throw new AppError("not_found", "No such workspace, or you are not a member of it.");

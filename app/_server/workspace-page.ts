@@ -1,8 +1,9 @@
 import "server-only";
 import { notFound, redirect } from "next/navigation";
 import { type Action, can } from "@/components/auth/roles";
-import { getMembershipBySlug, type WorkspaceMembership } from "@/db/memberships";
+import { getUserWithMembership, type WorkspaceMembership } from "@/db/memberships";
 import { getSessionUser, type SessionUser } from "./session";
+import { requestSessionToken } from "./session-cookie";
 
 /**
  * For a workspace page: the signed-in person (else to sign-in and back) and their membership by slug (a workspace
@@ -13,9 +14,11 @@ export async function requireWorkspacePage(
   path: string,
   action?: Action,
 ): Promise<{ user: SessionUser; membership: WorkspaceMembership }> {
-  const user = await getSessionUser();
-  if (!user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(path)}`);
-  const membership = await getMembershipBySlug(slug, user.id);
+  // the person and the membership in one round trip
+  const id = (await requestSessionToken())?.sub;
+  const found = id ? await getUserWithMembership(id, { slug }) : null;
+  if (!found) redirect(`/sign-in?callbackUrl=${encodeURIComponent(path)}`);
+  const { user, membership } = found;
   if (!membership || (action && !can(membership.role, action))) notFound();
   return { user, membership };
 }

@@ -3,8 +3,8 @@ import { describe, expect, it } from "vitest";
 import { listAudit } from "../../db/audit";
 import { getDb } from "../../db/client";
 import { changeMemberRole, LAST_OWNER_MESSAGE, listMembers, removeMember } from "../../db/members";
-import { getMembership } from "../../db/memberships";
-import { memberships } from "../../db/schema";
+import { getMembership, getMembershipBySlug, getUserWithMembership } from "../../db/memberships";
+import { memberships, users } from "../../db/schema";
 import { makePerson, makeWorkspace } from "./accounts-fixtures";
 
 describe("memberships and the last-owner rule", () => {
@@ -67,5 +67,26 @@ describe("memberships and the last-owner rule", () => {
     await expect(changeMemberRole(workspace.workspaceId, people.owner.id, stranger.id, "viewer")).rejects.toMatchObject({
       code: "not_found",
     });
+  });
+
+  it("finds a person and their membership in one query, by workspace id or slug, as the two separate reads do", async () => {
+    const { workspace, people } = await makeWorkspace(["owner", "reviewer"]);
+    const { workspace: other } = await makeWorkspace(["owner"]);
+    for (const by of [{ id: workspace.workspaceId }, { slug: workspace.slug }]) {
+      const found = await getUserWithMembership(people.reviewer.id, by);
+      expect(found?.user).toEqual({ id: people.reviewer.id, email: people.reviewer.email, name: people.reviewer.name });
+      expect(found?.membership).toEqual(await getMembership(workspace.workspaceId, people.reviewer.id));
+      expect(found?.membership).toEqual(await getMembershipBySlug(workspace.slug, people.reviewer.id));
+      expect(found?.membership?.role).toBe("reviewer");
+    }
+    // someone else's workspace, and an unknown slug: the person, no membership
+    for (const by of [{ id: other.workspaceId }, { slug: other.slug }, { slug: "no-such-workspace" }]) {
+      const found = await getUserWithMembership(people.reviewer.id, by);
+      expect(found?.user.id).toBe(people.reviewer.id);
+      expect(found?.membership).toBeNull();
+    }
+    // a person deleted since their cookie was signed is nobody
+    await getDb().delete(users).where(eq(users.id, people.reviewer.id));
+    expect(await getUserWithMembership(people.reviewer.id, { slug: workspace.slug })).toBeNull();
   });
 });

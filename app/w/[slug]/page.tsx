@@ -1,10 +1,8 @@
 import type { Metadata } from "next";
-import { notFound, redirect } from "next/navigation";
-import { getSessionUser } from "@/app/_server/session";
+import { requireWorkspacePage } from "@/app/_server/workspace-page";
 import { can } from "@/components/auth/roles";
 import { DesignsTable } from "@/components/designs/designs-table";
 import { NewDesignForm } from "@/components/designs/new-design-form";
-import { getMembershipBySlug } from "@/db/memberships";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Designs" };
@@ -12,10 +10,7 @@ export const metadata: Metadata = { title: "Designs" };
 /** The workspace's designs as a table, with "New design" for designers and owners. */
 export default async function WorkspaceDesignsPage({ params }: { params: Promise<{ slug: string }> }) {
   const { slug } = await params;
-  const user = await getSessionUser();
-  if (!user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(`/w/${slug}`)}`);
-  const membership = await getMembershipBySlug(slug, user.id);
-  if (!membership) notFound();
+  const { membership } = await requireWorkspacePage(slug, `/w/${slug}`);
   return (
     <div className="mx-auto w-full max-w-6xl px-4 py-8 sm:px-6">
       <div className="mb-6 flex flex-wrap items-end justify-between gap-4">
@@ -29,7 +24,11 @@ export default async function WorkspaceDesignsPage({ params }: { params: Promise
           <NewDesignForm workspaceId={membership.workspaceId} slug={slug} />
         </div>
       ) : null}
-      <DesignsTable workspaceId={membership.workspaceId} slug={slug} canRestore={can(membership.role, "design.delete")} />
+      <DesignsTable
+        workspaceId={membership.workspaceId}
+        slug={slug}
+        canRestore={can(membership.role, "design.delete")}
+      />
     </div>
   );
 }

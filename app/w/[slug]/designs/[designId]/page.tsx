@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound, redirect } from "next/navigation";
-import { getSessionUser } from "@/app/_server/session";
+import { notFound } from "next/navigation";
+import { requireWorkspacePage } from "@/app/_server/workspace-page";
 import { AttachmentsPanel } from "@/components/attachments/attachments-panel";
 import { can } from "@/components/auth/roles";
 import { BenchLinksPanel } from "@/components/designs/bench-links-panel";
@@ -17,7 +17,6 @@ import { SaveRevisionForm } from "@/components/designs/save-revision-form";
 import { StatusBadge } from "@/components/designs/status-badge";
 import { getDesign } from "@/db/designs";
 import { AppError } from "@/db/errors";
-import { getMembershipBySlug } from "@/db/memberships";
 import { getRevision, listRevisions } from "@/db/revisions";
 import { DesignReviewPanels } from "./design-review-panels";
 
@@ -39,10 +38,7 @@ async function loadDesign(workspaceId: string, designId: string) {
 export default async function DesignPage({ params, searchParams }: Props) {
   const { slug, designId } = await params;
   const { r } = await searchParams;
-  const user = await getSessionUser();
-  if (!user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(`/w/${slug}/designs/${designId}`)}`);
-  const membership = await getMembershipBySlug(slug, user.id);
-  if (!membership) notFound();
+  const { user, membership } = await requireWorkspacePage(slug, `/w/${slug}/designs/${designId}`);
   const { workspaceId, role } = membership;
   const design = await loadDesign(workspaceId, designId);
   const deleted = Boolean(design.deletedAt);

@@ -1,13 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound, redirect } from "next/navigation";
-import { getSessionUser, requireAction } from "@/app/_server/session";
+import { notFound } from "next/navigation";
+import { requireWorkspacePage } from "@/app/_server/workspace-page";
 import { can } from "@/components/auth/roles";
 import { Bench } from "@/components/bench/bench";
 import { emptyCircuit } from "@/components/designs/empty-circuit";
 import { getDesign } from "@/db/designs";
 import { AppError } from "@/db/errors";
-import { getMembershipBySlug } from "@/db/memberships";
 import { getRevision } from "@/db/revisions";
 import { BenchChecks } from "./bench-checks";
 
@@ -22,13 +21,9 @@ type Props = { params: Promise<{ slug: string; designId: string }> };
  */
 export default async function BenchPage({ params }: Props) {
   const { slug, designId } = await params;
-  const user = await getSessionUser();
-  if (!user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(`/w/${slug}/designs/${designId}/bench`)}`);
-  const membership = await getMembershipBySlug(slug, user.id);
-  if (!membership) notFound();
+  const { membership } = await requireWorkspacePage(slug, `/w/${slug}/designs/${designId}/bench`, "design.read");
   const { workspaceId, role } = membership;
   try {
-    await requireAction(workspaceId, "design.read");
     const design = await getDesign(workspaceId, designId);
     const head = design.headRevisionId ? await getRevision(workspaceId, designId, design.headRevisionId) : null;
     const readOnly = !can(role, "revision.create");

@@ -1,14 +1,13 @@
 import type { Metadata } from "next";
 import { headers } from "next/headers";
 import Link from "next/link";
-import { notFound, redirect } from "next/navigation";
-import { getSessionUser } from "@/app/_server/session";
+import { notFound } from "next/navigation";
+import { requireWorkspacePage } from "@/app/_server/workspace-page";
 import { loadReport } from "@/app/_server/sign-off/load-report";
 import { can } from "@/components/auth/roles";
 import { AttachReportForm } from "@/components/report/attach-report-form";
 import { ReportView } from "@/components/report/report-view";
 import { AppError } from "@/db/errors";
-import { getMembershipBySlug } from "@/db/memberships";
 import { signOffRecord } from "@/db/sign-off";
 
 export const dynamic = "force-dynamic";
@@ -20,10 +19,7 @@ type Props = { params: Promise<{ slug: string; designId: string; revisionId: str
 export default async function ReportPage({ params }: Props) {
   const { slug, designId, revisionId } = await params;
   const here = `/w/${slug}/designs/${designId}/revisions/${revisionId}/report`;
-  const user = await getSessionUser();
-  if (!user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(here)}`);
-  const membership = await getMembershipBySlug(slug, user.id);
-  if (!membership) notFound();
+  const { membership } = await requireWorkspacePage(slug, here);
   const host = (await headers()).get("host");
   const origin = process.env.NEXTAUTH_URL ?? (host ? `http://${host}` : "");
   try {
