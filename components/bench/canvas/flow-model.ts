@@ -13,6 +13,9 @@ import { keyValueText } from "../symbols/key-value";
 
 export const GROUND_HANDLE = "gnd";
 export const LABEL_HANDLE = "net";
+/** Where the ground symbol's pin sits in its 40 × 40 node (top centre), and where a net label's (left middle). */
+export const GROUND_PIN_OFFSET = { x: 20, y: 0 };
+export const LABEL_PIN_OFFSET = { x: 0, y: 12 };
 
 export interface PartNodeData extends Record<string, unknown> {
   part: BenchPart;

@@ -36,9 +36,14 @@ const SEARCH_STEPS = 40;
 
 /** What a part occupies at `placement`: its box, and the label under it centred on the box. */
 export function partFootprint(part: BenchPart, placement: Placement, parameters: Record<string, RawValue>): Rect {
+  return partFootprintWithText(part, placement, keyValueText(part, parameters));
+}
+
+/** `partFootprint` when the key value's text is known already (the canvas has it; no second parse). */
+export function partFootprintWithText(part: BenchPart, placement: Placement, keyText: string): Rect {
   const size = rotatedSize(part.kind, placement.rotation);
   const id = part.enabled ? part.id : `${part.id} (off)`;
-  const letters = Math.max(id.length, keyValueText(part, parameters).length);
+  const letters = Math.max(id.length, keyText.length);
   const width = Math.max(size.width, letters * MONO_LETTER + LABEL_PADDING);
   return {
     x: placement.x + (size.width - width) / 2,
