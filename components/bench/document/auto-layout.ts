@@ -96,7 +96,10 @@ export function drawNets(circuit: BenchCircuit, placements: Record<string, Place
       const at = placements[part.id] ?? { x: 0, y: 0 };
       const box = SYMBOL_BOXES[part.kind];
       const first = pinPoint(part, groundPins[0][0]);
-      layout.grounds[groundId] = { x: snap(first.x - GRID), y: snap(at.y + box.height + GROUND_DROP) };
+      // under the pin, one grid step out for a side pin, so its wire leaves the pin and turns down once
+      const side = box.pins[groundPins[0][0]]?.side;
+      const out = side === "right" ? GRID : side === "left" ? -GRID : 0;
+      layout.grounds[groundId] = { x: snap(first.x + out - GRID), y: snap(at.y + box.height + GROUND_DROP) };
       for (const [pin] of groundPins) {
         wires.push({ id: wireId(), from: { kind: "pin", part: part.id, pin }, to: { kind: "ground", id: groundId } });
       }

@@ -62,6 +62,12 @@ export const DEFAULT_ROUTE_OPTIONS: RouteOptions = { grid: 20, clearance: 8, ben
 
 /** Extra cost per unit length of running along another net's wire (drawn on top of it: avoid hard). */
 const SHARED_LINE_COST = 6;
+/**
+ * Share of the length paid for running along a wire of the same net: one conductor drawn once reads better than
+ * two parallel lines a grid apart. (It makes the A* estimate a little optimistic-to-pessimistic; the route is then
+ * near-cheapest rather than cheapest, which a drawing does not notice.)
+ */
+const SAME_NET_SHARE = 0.4;
 /** Extra cost of crossing another net's wire (a crossing reads fine, but fewer is cleaner). */
 const CROSSING_COST = 12;
 /** Extra cost of passing through another net's pin stub end (it would look joined to that pin). */
@@ -305,9 +311,9 @@ function search(
       const q = jy * nx + jx;
       if (grid.blocked[q] && q !== goal) continue;
       const length = Math.abs(grid.xs[jx] - grid.xs[ix]) + Math.abs(grid.ys[jy] - grid.ys[iy]);
-      let step = length;
-      if (nd !== d) step += options.bendCost + (foreign(occupancy.points[p], net) ? FOREIGN_PIN_COST : 0);
       const edge = Math.min(p, q) * 2 + (nd === 0 || nd === 2 ? 0 : 1);
+      let step = occupancy.edges[edge] === net ? SAME_NET_SHARE * length : length;
+      if (nd !== d) step += options.bendCost + (foreign(occupancy.points[p], net) ? FOREIGN_PIN_COST : 0);
       if (foreign(occupancy.edges[edge], net)) step += SHARED_LINE_COST * length;
       else if (foreign(occupancy.points[q], net)) step += CROSSING_COST;
       if (foreign(occupancy.pinEnds[q], net)) step += FOREIGN_PIN_COST;
