@@ -151,7 +151,8 @@ export function toFlowEdges(
       className: faulty ? "bench-wire bench-wire-fault" : "bench-wire",
       data: { net, path: route ? svgPath(route.points) : "", routed: route?.routed ?? false },
       ariaLabel: net === undefined ? "wire" : `wire on net ${net}`,
-      // the two items it joins, for tests and tools that read the drawing from the page
+      // the two items it joins, for tests and tools that read the drawing from the page (React Flow's type for
+      // these attributes lists only the SVG ones, not data-*)
       domAttributes: { "data-from": from.node, "data-to": to.node } as WireFlowEdge["domAttributes"],
     };
   });

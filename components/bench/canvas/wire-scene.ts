@@ -5,9 +5,10 @@
  * value edit or a selection leaves the key, and so the routes, as they were.
  */
 import type { BenchDocument } from "../document/document";
-import { groundFootprint, labelFootprint, partFootprintWithText } from "../document/free-spot";
+import { groundFootprint, labelFootprint, partLabelRect } from "../document/free-spot";
 import { GRID, type Endpoint } from "../document/layout";
-import { rotatedPinOffset, rotatedSide, SYMBOL_BOXES } from "../symbols/pin-layout";
+import { labelLeft } from "../symbols/label-place";
+import { rotatedPinOffset, rotatedSide, rotatedSize, SYMBOL_BOXES } from "../symbols/pin-layout";
 import type { Obstacle, WireEnd, WireRequest } from "../wiring/orthogonal-router";
 import {
   type BenchFlowNode,
@@ -24,23 +25,32 @@ export interface WireScene {
 }
 
 /**
- * The label under a part, widened to whole steps of two grids about the part's centre: a value edit that changes
- * the text by a letter or two keeps the box (and so every route) the same, and the box stays symmetric.
+ * A part is two boxes to keep clear of: its symbol and the text under it, so a wire may pass close beside a small
+ * symbol whose label is wide. The text's box is widened to whole steps of two grids (from its left edge, or about
+ * its centre when it is centred), and at least as wide as the symbol: a value edit that changes the text by a letter
+ * or two keeps the box, and so every route, the same; a value whose text outgrows it re-routes what passes by.
  */
 const LABEL_STEP = 2 * GRID;
 
-function partObstacle(node: PartFlowNode): Obstacle {
+function partObstacles(node: PartFlowNode): Obstacle[] {
   const { part, placement, keyText } = node.data;
-  const rect = partFootprintWithText(part, placement, keyText);
-  const centre = rect.x + rect.width / 2;
-  const width = Math.ceil(rect.width / LABEL_STEP) * LABEL_STEP;
-  return { id: node.id, x: centre - width / 2, y: rect.y, width, height: rect.height };
+  const size = rotatedSize(part.kind, placement.rotation);
+  const label = partLabelRect(part, placement, keyText);
+  const left = labelLeft(part.kind, placement.rotation);
+  // never narrower than the symbol above it: a short value's edit then moves nothing at all
+  const under = left === null ? size.width : Math.max(0, size.width - left);
+  const width = Math.max(under, Math.ceil(label.width / LABEL_STEP) * LABEL_STEP);
+  const x = left === null ? label.x + (label.width - width) / 2 : label.x;
+  return [
+    { id: node.id, x: placement.x, y: placement.y, ...size },
+    { id: node.id, x, y: label.y, width, height: label.height },
+  ];
 }
 
-function obstacleOf(node: BenchFlowNode): Obstacle {
-  if (node.type === "part") return partObstacle(node);
+function obstaclesOf(node: BenchFlowNode): Obstacle[] {
+  if (node.type === "part") return partObstacles(node);
   const rect = node.type === "ground" ? groundFootprint(node.position) : labelFootprint(node.data.net, node.position);
-  return { id: node.id, ...rect };
+  return [{ id: node.id, ...rect }];
 }
 
 function wireEnd(endpoint: Endpoint, nodes: Map<string, BenchFlowNode>): WireEnd | null {
@@ -77,7 +87,7 @@ export function wireScene(document: BenchDocument, nodes: readonly BenchFlowNode
     const net = netOfEndpoint(document, wire.from) ?? netOfEndpoint(document, wire.to) ?? wire.id;
     wires.push({ id: wire.id, net, from, to });
   }
-  return { obstacles: nodes.map(obstacleOf), wires };
+  return { obstacles: nodes.flatMap(obstaclesOf), wires };
 }
 
 /** A string equal for two scenes exactly when they route the same. */

@@ -10,9 +10,13 @@ import type { BenchCircuit, BenchPart } from "./circuit";
 import { nextFreeId } from "./ids";
 import { type BenchLayout, emptyLayout, GRID, type Placement, type Wire } from "./layout";
 
-/** Distance between columns and rows, canvas units (room for the symbol, its labels and the wires). */
+/**
+ * Distance between columns and rows, canvas units (room for the symbol, its labels and the wires). A row holds the
+ * tallest upright symbol (100), the ground symbol under it (GROUND_DROP + 40) and a grid of room for a wire before
+ * the next row: 200 let a ground touch the pin of the part below.
+ */
 const COLUMN_STEP = 260;
-const ROW_STEP = 200;
+const ROW_STEP = 240;
 /** How far below its part a ground symbol sits. */
 const GROUND_DROP = 60;
 

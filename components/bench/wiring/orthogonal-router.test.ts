@@ -40,7 +40,12 @@ const against: Record<Side, Side> = { left: "right", right: "left", top: "bottom
  * C. Y. Lee, "An algorithm for path connections", 1961), written here independently of the router: a point is free
  * when it is outside every box grown by the clearance. Returns its length in canvas units.
  */
-function leeLength(from: Point, to: Point, boxes: Obstacle[], span: { x0: number; y0: number; x1: number; y1: number }) {
+function leeLength(
+  from: Point,
+  to: Point,
+  boxes: Obstacle[],
+  span: { x0: number; y0: number; x1: number; y1: number },
+) {
   const free = (p: Point) =>
     !boxes.some((o) => p.x > o.x - C && p.x < o.x + o.width + C && p.y > o.y - C && p.y < o.y + o.height + C);
   const key = (p: Point) => `${p.x},${p.y}`;

@@ -18,7 +18,7 @@ export interface Point {
   y: number;
 }
 
-/** A drawn item's box (canvas units); wires keep out of it, except to reach their own pins. */
+/** A drawn item's box (canvas units); wires keep out of it, except to reach their own pins. One item may have several. */
 export interface Obstacle {
   id: string;
   x: number;
@@ -100,9 +100,7 @@ function spanning(values: number[], step: number, extras: number[]): number[] {
 }
 
 function inside(o: Obstacle, x: number, y: number, clearance: number): boolean {
-  return (
-    x > o.x - clearance && x < o.x + o.width + clearance && y > o.y - clearance && y < o.y + o.height + clearance
-  );
+  return x > o.x - clearance && x < o.x + o.width + clearance && y > o.y - clearance && y < o.y + o.height + clearance;
 }
 
 /** The grid points, and which of them lie inside an item. */
@@ -110,8 +108,16 @@ function buildGrid(obstacles: readonly Obstacle[], wires: readonly WireRequest[]
   const ends = wires.flatMap((w) => [w.from.point, w.to.point]);
   const allX = [...obstacles.flatMap((o) => [o.x, o.x + o.width]), ...ends.map((p) => p.x)];
   const allY = [...obstacles.flatMap((o) => [o.y, o.y + o.height]), ...ends.map((p) => p.y)];
-  const xs = spanning(allX, options.grid, ends.map((p) => p.x));
-  const ys = spanning(allY, options.grid, ends.map((p) => p.y));
+  const xs = spanning(
+    allX,
+    options.grid,
+    ends.map((p) => p.x),
+  );
+  const ys = spanning(
+    allY,
+    options.grid,
+    ends.map((p) => p.y),
+  );
   const blocked = new Uint8Array(xs.length * ys.length);
   const c = options.clearance;
   for (const o of obstacles) {
@@ -148,12 +154,12 @@ function lowerBound(values: number[], v: number, strict: boolean): number {
  * null when that walk enters another item first (the pin faces straight into it). The last point may lie within
  * another item's clearance (two items a grid apart): the search may start or end there, never pass through.
  */
-function escape(grid: Grid, end: WireEnd, obstacles: readonly Obstacle[], clearance: number): number[] | null {
+function walkOut(grid: Grid, end: WireEnd, obstacles: readonly Obstacle[], clearance: number): number[] | null {
   const nx = grid.xs.length;
   let ix = grid.xAt.get(end.point.x) as number;
   let iy = grid.yAt.get(end.point.y) as number;
   const d = OUTWARD[end.side];
-  const own = obstacles.find((o) => o.id === end.owner);
+  const own = obstacles.filter((o) => o.id === end.owner);
   const walked = [iy * nx + ix];
   for (;;) {
     ix += DX[d];
@@ -163,8 +169,8 @@ function escape(grid: Grid, end: WireEnd, obstacles: readonly Obstacle[], cleara
     walked.push(index);
     const x = grid.xs[ix];
     const y = grid.ys[iy];
-    if (obstacles.some((o) => o !== own && inside(o, x, y, 0))) return null;
-    if (!own || !inside(own, x, y, clearance)) return walked;
+    if (obstacles.some((o) => o.id !== end.owner && inside(o, x, y, 0))) return null;
+    if (!own.some((o) => inside(o, x, y, clearance))) return walked;
   }
 }
 
@@ -185,12 +191,7 @@ function facing(from: WireEnd, to: WireEnd, obstacles: readonly Obstacle[]): boo
   const y1 = Math.max(from.point.y, to.point.y);
   return !obstacles.some(
     (o) =>
-      o.id !== from.owner &&
-      o.id !== to.owner &&
-      x1 >= o.x &&
-      x0 <= o.x + o.width &&
-      y1 >= o.y &&
-      y0 <= o.y + o.height,
+      o.id !== from.owner && o.id !== to.owner && x1 >= o.x && x0 <= o.x + o.width && y1 >= o.y && y0 <= o.y + o.height,
   );
 }
 
@@ -377,8 +378,7 @@ export function steppedPath(from: WireEnd, to: WireEnd, grid: number): Point[] {
   return corners([from.point, a, ...middle, b, to.point]);
 }
 
-const manhattan = (w: WireRequest) =>
-  Math.abs(w.from.point.x - w.to.point.x) + Math.abs(w.from.point.y - w.to.point.y);
+const manhattan = (w: WireRequest) => Math.abs(w.from.point.x - w.to.point.x) + Math.abs(w.from.point.y - w.to.point.y);
 
 /**
  * Routes every wire. Shorter wires go first, so the direct ones get their straight lines and the long ones go round;
@@ -403,7 +403,7 @@ export function routeWires(
   const escapes = new Map<WireEnd, number[] | null>();
   for (const wire of wires) {
     for (const end of [wire.from, wire.to]) {
-      const walked = escape(grid, end, obstacles, options.clearance);
+      const walked = walkOut(grid, end, obstacles, options.clearance);
       escapes.set(end, walked);
       if (walked) occupancy.markPinEnd(walked[walked.length - 1], netOf(wire.net));
     }
