@@ -145,6 +145,19 @@ describe("orthogonal wire router", () => {
       }
   });
 
+  it("squeezes past along an edge, rather than falling back, where two items stand one grid apart", () => {
+    // B's top pin faces A's underside one grid below it: the only way out runs along A's edge
+    const a = box("A", 0, 0, 240, 40);
+    const boxes = [a, box("B", 160, 60, 80, 100), box("C", -200, 200, 120, 40)];
+    const wire: WireRequest = { id: "w", net: "n", from: end(200, 60, "top", "B"), to: end(-80, 220, "right", "C") };
+    const route = routeWires(boxes, [wire]).get("w") as RoutedWire;
+    expect(route.routed).toBe(true);
+    expect(isOrthogonal(route)).toBe(true);
+    // never inside A (touching its edge is allowed), nor inside the other items past the pins' own stubs
+    for (const [p, q] of segments(route)) expect(segmentHits(p, q, a, 0)).toBe(false);
+    expect(direction(route.points[0], route.points[1])).toBe("top");
+  });
+
   it("falls back to a stepped path when the pin faces straight into another item", () => {
     // B sits hard against A's right pin: there is no way out of it to the right
     const boxes = [box("A", 0, 0, 120, 40), box("B", 125, -20, 40, 80), box("C", 300, 200, 120, 40)];

@@ -72,6 +72,14 @@ const SAME_NET_SHARE = 0.4;
 const CROSSING_COST = 12;
 /** Extra cost of passing through another net's pin stub end (it would look joined to that pin). */
 const FOREIGN_PIN_COST = 400;
+/**
+ * Extra cost per unit length within an item's clearance: a route keeps its distance where it can, and squeezes past
+ * (rather than giving up) where two items stand a grid apart. Never inside an item: every box is at least 24 units
+ * each way, more than a grid step, so a step between two points outside a box cannot cross it.
+ */
+const CLEARANCE_COST = 3;
+const SOFT = 1;
+const HARD = 2;
 /** Margin (grid steps) around the drawing the routes may use to go round everything. */
 const MARGIN_STEPS = 3;
 
@@ -87,7 +95,7 @@ interface Grid {
   /** index of each x / y value */
   xAt: Map<number, number>;
   yAt: Map<number, number>;
-  /** 1 where a point lies strictly inside an obstacle grown by the clearance */
+  /** SOFT where a point lies within an obstacle's clearance, HARD where strictly inside the obstacle, else 0 */
   blocked: Uint8Array;
 }
 
@@ -119,15 +127,9 @@ function buildGrid(obstacles: readonly Obstacle[], wires: readonly WireRequest[]
     ends.map((p) => p.y),
   );
   const blocked = new Uint8Array(xs.length * ys.length);
-  const c = options.clearance;
-  for (const o of obstacles) {
-    // the index range of points strictly inside the grown box
-    const x0 = lowerBound(xs, o.x - c, true);
-    const x1 = lowerBound(xs, o.x + o.width + c, false);
-    const y0 = lowerBound(ys, o.y - c, true);
-    const y1 = lowerBound(ys, o.y + o.height + c, false);
-    for (let iy = y0; iy < y1; iy++) blocked.fill(1, iy * xs.length + x0, iy * xs.length + x1);
-  }
+  // the clearance rings first, then the insides over them
+  for (const o of obstacles) mark(blocked, xs, ys, o, options.clearance, SOFT);
+  for (const o of obstacles) mark(blocked, xs, ys, o, 0, HARD);
   return {
     xs,
     ys,
@@ -135,6 +137,15 @@ function buildGrid(obstacles: readonly Obstacle[], wires: readonly WireRequest[]
     yAt: new Map(ys.map((y, i) => [y, i])),
     blocked,
   };
+}
+
+/** Sets `value` at the points strictly inside `o` grown by `grow`. */
+function mark(blocked: Uint8Array, xs: number[], ys: number[], o: Obstacle, grow: number, value: number) {
+  const x0 = lowerBound(xs, o.x - grow, true);
+  const x1 = lowerBound(xs, o.x + o.width + grow, false);
+  const y0 = lowerBound(ys, o.y - grow, true);
+  const y1 = lowerBound(ys, o.y + o.height + grow, false);
+  for (let iy = y0; iy < y1; iy++) blocked.fill(value, iy * xs.length + x0, iy * xs.length + x1);
 }
 
 /** First index whose value is > v (strict) or >= v (not strict). */
@@ -310,7 +321,7 @@ function search(
       const jy = iy + DY[nd];
       if (jx < 0 || jy < 0 || jx >= nx || jy >= grid.ys.length) continue;
       const q = jy * nx + jx;
-      if (grid.blocked[q] && q !== goal) continue;
+      if (grid.blocked[q] === HARD && q !== goal) continue;
       const length = Math.abs(grid.xs[jx] - grid.xs[ix]) + Math.abs(grid.ys[jy] - grid.ys[iy]);
       const edge = Math.min(p, q) * 2 + (nd === 0 || nd === 2 ? 0 : 1);
       let step = occupancy.edges[edge] === net ? SAME_NET_SHARE * length : length;
@@ -318,6 +329,7 @@ function search(
       if (foreign(occupancy.edges[edge], net)) step += SHARED_LINE_COST * length;
       else if (foreign(occupancy.points[q], net)) step += CROSSING_COST;
       if (foreign(occupancy.pinEnds[q], net)) step += FOREIGN_PIN_COST;
+      if (grid.blocked[q] === SOFT) step += CLEARANCE_COST * length;
       const next = q * 4 + nd;
       const total = cost[state] + step;
       if (total < cost[next]) {
