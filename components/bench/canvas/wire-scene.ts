@@ -32,6 +32,38 @@ export interface WireScene {
  */
 const LABEL_STEP = 2 * GRID;
 
+/** A pin's name is 9 px monospace (part-node.tsx): about 0.6 em a letter (common practice), rounded up. */
+const PIN_NAME_LETTER = 5.6;
+/** The name starts this far right of an upward or downward pin (part-node.tsx PIN_NAME_OFFSET). */
+const PIN_NAME_SHIFT = 4;
+/** Every box the router is given is at least this big each way (more than a grid step: see the router). */
+const MIN_BOX = 24;
+
+/**
+ * The name beside an upward or downward pin runs rightwards and can stick out past the symbol (a capsule's
+ * "diaphragm"): that part is kept clear too, as a box one grid row deep along the pin's edge.
+ */
+function pinNameOverhangs(node: PartFlowNode, size: { width: number; height: number }): Obstacle[] {
+  const { part, placement } = node.data;
+  const boxes: Obstacle[] = [];
+  for (const [pin, place] of Object.entries(SYMBOL_BOXES[part.kind].pins)) {
+    const side = rotatedSide(place.side, placement.rotation);
+    if (side !== "top" && side !== "bottom") continue;
+    const at = rotatedPinOffset(part.kind, pin, placement.rotation);
+    const right = at.x + PIN_NAME_SHIFT + PIN_NAME_LETTER * pin.length;
+    if (right <= size.width) continue;
+    const y = side === "top" ? at.y - 2 : at.y + 2 - MIN_BOX;
+    boxes.push({
+      id: node.id,
+      x: placement.x + at.x,
+      y: placement.y + y,
+      width: Math.max(MIN_BOX, right - at.x),
+      height: MIN_BOX,
+    });
+  }
+  return boxes;
+}
+
 function partObstacles(node: PartFlowNode): Obstacle[] {
   const { part, placement, keyText } = node.data;
   const size = rotatedSize(part.kind, placement.rotation);
@@ -44,6 +76,7 @@ function partObstacles(node: PartFlowNode): Obstacle[] {
   return [
     { id: node.id, x: placement.x, y: placement.y, ...size },
     { id: node.id, x, y: label.y, width, height: label.height },
+    ...pinNameOverhangs(node, size),
   ];
 }
 

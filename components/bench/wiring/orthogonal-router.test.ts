@@ -96,7 +96,7 @@ describe("orthogonal wire router", () => {
     expect(isOrthogonal(route)).toBe(true);
     for (const [a, b] of segments(route)) expect(segmentHits(a, b, blocker, C)).toBe(false);
     // every corner on the snap grid
-    for (const p of route.points) expect([p.x % G, p.y % G]).toEqual([0, 0]);
+    for (const p of route.points) expect([Math.abs(p.x % G), Math.abs(p.y % G)]).toEqual([0, 0]);
     // from the first grid point out of A's pin to the last before B's: Lee's shortest clear path (the detour over or
     // under the blocker has the same four bends either way, so the bend cost cannot buy a longer one)
     const lee = leeLength({ x: 140, y: 20 }, { x: 280, y: 20 }, boxes, { x0: -100, y0: -200, x1: 500, y1: 300 });

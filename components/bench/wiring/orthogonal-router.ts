@@ -130,11 +130,15 @@ function buildGrid(obstacles: readonly Obstacle[], wires: readonly WireRequest[]
   // the clearance rings first, then the insides over them
   for (const o of obstacles) mark(blocked, xs, ys, o, options.clearance, SOFT);
   for (const o of obstacles) mark(blocked, xs, ys, o, 0, HARD);
+  // a pin is passed by no other wire (it would read as joined to it); a wire's own pins are its ends, never passed
+  const xAt = new Map(xs.map((x, i) => [x, i]));
+  const yAt = new Map(ys.map((y, i) => [y, i]));
+  for (const p of ends) blocked[(yAt.get(p.y) as number) * xs.length + (xAt.get(p.x) as number)] = HARD;
   return {
     xs,
     ys,
-    xAt: new Map(xs.map((x, i) => [x, i])),
-    yAt: new Map(ys.map((y, i) => [y, i])),
+    xAt,
+    yAt,
     blocked,
   };
 }
