@@ -11,6 +11,7 @@ import { normaliseCircuit } from "@/components/bench/document/circuit";
 import { canonicalPartition } from "@/components/bench/document/nets";
 import { runCircuit } from "@/sim/run";
 import { type Browser, openBrowser, screenshotPath } from "./chromium";
+import { expectClean, readWires } from "./wire-check";
 
 const baseUrl = inject("baseUrl");
 const DESIGNER = { email: "tomas@larkfield.example", password: "bench-demo-2026" };
@@ -151,6 +152,8 @@ describe("drawing on the bench", () => {
     await wire(page, pin("J1.s"), pin("IN1.p"));
     await wire(page, pin("IN1.n"), GROUND);
     await expect(page.locator(".react-flow__edge").count()).resolves.toBe(8);
+    // each wire routed round the other parts (tests/app/wire-check.ts)
+    expectClean(await readWires(page));
 
     // values typed as the engine reads them; the parsed value shows beside the field
     await typeValue(page, "MIC1", "electret_voltage", "100");

@@ -10,7 +10,6 @@ import {
   Background,
   BackgroundVariant,
   type Connection,
-  type Edge,
   ConnectionLineType,
   ConnectionMode,
   Controls,
@@ -37,14 +36,18 @@ import {
   keepUnchangedNodes,
   toFlowEdges,
   toFlowNodes,
+  type WireFlowEdge,
 } from "./flow-model";
 import { GroundNode } from "./ground-node";
 import { HelpOverlay } from "./help-overlay";
 import { LabelNode } from "./label-node";
 import { PartNode } from "./part-node";
 import { commandOfKey } from "./shortcuts";
+import { useWireRoutes } from "./use-wire-routes";
+import { WireEdge } from "./wire-edge";
 
 const NODE_TYPES = { part: PartNode, ground: GroundNode, netLabel: LabelNode };
+const EDGE_TYPES = { wire: WireEdge };
 // minZoom: a fitted drawing never shrinks its 10 px value labels below 9 px on screen (a large circuit is then
 // fitted as far as it stays readable, and panned for the rest)
 const FIT_OPTIONS = { padding: 0.2, maxZoom: 1.4, minZoom: 0.9 };
@@ -105,7 +108,7 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
 
   // unchanged nodes and wires keep their objects from the last render (React Flow then leaves them alone)
   const lastNodes = useRef<BenchFlowNode[]>([]);
-  const lastEdges = useRef<Edge[]>([]);
+  const lastEdges = useRef<WireFlowEdge[]>([]);
   const nodes = useMemo(() => {
     lastNodes.current = keepUnchangedNodes(
       lastNodes.current,
@@ -113,10 +116,11 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
     );
     return lastNodes.current;
   }, [document, selection, error]);
+  const routes = useWireRoutes(document, nodes);
   const edges = useMemo(() => {
-    lastEdges.current = keepUnchangedEdges(lastEdges.current, toFlowEdges(document, selection, error));
+    lastEdges.current = keepUnchangedEdges(lastEdges.current, toFlowEdges(document, selection, error, routes));
     return lastEdges.current;
-  }, [document, selection, error]);
+  }, [document, selection, error, routes]);
 
   const applySelection = useCallback(
     (changes: { id: string; selected: boolean; node: boolean }[]) => {
@@ -280,10 +284,11 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
       }}
       onDrop={onDrop}
     >
-      <ReactFlow<BenchFlowNode>
+      <ReactFlow<BenchFlowNode, WireFlowEdge>
         nodes={nodes}
         edges={edges}
         nodeTypes={NODE_TYPES}
+        edgeTypes={EDGE_TYPES}
         onNodesChange={onNodesChange}
         onEdgesChange={onEdgesChange}
         onConnect={onConnect}
@@ -297,7 +302,7 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
           surface.current?.focus();
         }}
         connectionMode={ConnectionMode.Loose}
-        connectionLineType={ConnectionLineType.SmoothStep}
+        connectionLineType={ConnectionLineType.Step}
         snapToGrid
         snapGrid={[GRID, GRID]}
         nodesDraggable={!readOnly}

@@ -10,9 +10,13 @@ import type { BenchDocument } from "../document/document";
 import type { Endpoint, Placement } from "../document/layout";
 import type { ItemRef, Selection } from "../store/selection";
 import { keyValueText } from "../symbols/key-value";
+import { type RoutedWire, svgPath } from "../wiring/orthogonal-router";
 
 export const GROUND_HANDLE = "gnd";
 export const LABEL_HANDLE = "net";
+/** Where the ground symbol's pin sits in its 40 × 40 node (top centre), and where a net label's (left middle). */
+export const GROUND_PIN_OFFSET = { x: 20, y: 0 };
+export const LABEL_PIN_OFFSET = { x: 0, y: 12 };
 
 export interface PartNodeData extends Record<string, unknown> {
   part: BenchPart;
@@ -27,6 +31,15 @@ export interface LabelNodeData extends Record<string, unknown> {
   net: string;
   error: string | null;
 }
+
+export interface WireEdgeData extends Record<string, unknown> {
+  net: string | undefined;
+  /** the routed SVG path in canvas units ("" when the wire has no route yet) */
+  path: string;
+  /** false when the router found no clear way and drew the stepped fallback */
+  routed: boolean;
+}
+export type WireFlowEdge = Edge<WireEdgeData, "wire">;
 
 export type PartFlowNode = Node<PartNodeData, "part">;
 export type GroundFlowNode = Node<GroundNodeData, "ground">;
@@ -114,24 +127,33 @@ export function toFlowNodes(
   return nodes;
 }
 
-export function toFlowEdges(document: BenchDocument, selection: Selection, error: SimErrorJson | null): Edge[] {
+export function toFlowEdges(
+  document: BenchDocument,
+  selection: Selection,
+  error: SimErrorJson | null,
+  routes: ReadonlyMap<string, RoutedWire>,
+): WireFlowEdge[] {
   const selected = new Set(selection.wires);
   return document.layout.wires.map((wire) => {
     const from = handleOfEndpoint(wire.from);
     const to = handleOfEndpoint(wire.to);
     const net = netOfEndpoint(document, wire.from) ?? netOfEndpoint(document, wire.to);
     const faulty = error?.net !== undefined && error.net === net;
+    const route = routes.get(wire.id);
     return {
       id: wire.id,
       source: from.node,
       sourceHandle: from.handle,
       target: to.node,
       targetHandle: to.handle,
-      type: "smoothstep",
+      type: "wire",
       selected: selected.has(wire.id),
       className: faulty ? "bench-wire bench-wire-fault" : "bench-wire",
-      data: { net },
+      data: { net, path: route ? svgPath(route.points) : "", routed: route?.routed ?? false },
       ariaLabel: net === undefined ? "wire" : `wire on net ${net}`,
+      // the two items it joins, for tests and tools that read the drawing from the page (React Flow's type for
+      // these attributes lists only the SVG ones, not data-*)
+      domAttributes: { "data-from": from.node, "data-to": to.node } as WireFlowEdge["domAttributes"],
     };
   });
 }
@@ -153,7 +175,7 @@ function sameNode(a: BenchFlowNode, b: BenchFlowNode): boolean {
   );
 }
 
-function sameEdge(a: Edge, b: Edge): boolean {
+function sameEdge(a: WireFlowEdge, b: WireFlowEdge): boolean {
   return (
     a.source === b.source &&
     a.sourceHandle === b.sourceHandle &&
@@ -162,7 +184,8 @@ function sameEdge(a: Edge, b: Edge): boolean {
     a.selected === b.selected &&
     a.className === b.className &&
     a.ariaLabel === b.ariaLabel &&
-    (a.data?.net ?? null) === (b.data?.net ?? null)
+    a.data?.net === b.data?.net &&
+    a.data?.path === b.data?.path
   );
 }
 
@@ -180,4 +203,5 @@ function keepUnchanged<T extends { id: string }>(previous: readonly T[], next: T
 
 export const keepUnchangedNodes = (previous: readonly BenchFlowNode[], next: BenchFlowNode[]) =>
   keepUnchanged(previous, next, sameNode);
-export const keepUnchangedEdges = (previous: readonly Edge[], next: Edge[]) => keepUnchanged(previous, next, sameEdge);
+export const keepUnchangedEdges = (previous: readonly WireFlowEdge[], next: WireFlowEdge[]) =>
+  keepUnchanged(previous, next, sameEdge);

@@ -3,7 +3,7 @@
 import { Handle, type NodeProps, Position } from "@xyflow/react";
 import { memo } from "react";
 import { GroundSymbol } from "../symbols/part-symbol";
-import { GROUND_HANDLE, type GroundFlowNode } from "./flow-model";
+import { GROUND_HANDLE, GROUND_PIN_OFFSET, type GroundFlowNode } from "./flow-model";
 
 function GroundNodeView({ selected, data }: NodeProps<GroundFlowNode>) {
   return (
@@ -16,7 +16,7 @@ function GroundNodeView({ selected, data }: NodeProps<GroundFlowNode>) {
         id={GROUND_HANDLE}
         type="source"
         position={Position.Top}
-        style={{ left: 20, top: 0, transform: "translate(-50%, -50%)" }}
+        style={{ left: GROUND_PIN_OFFSET.x, top: GROUND_PIN_OFFSET.y, transform: "translate(-50%, -50%)" }}
         className="bench-handle"
         title="Ground pin (net 0)"
       />

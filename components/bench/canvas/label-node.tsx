@@ -2,7 +2,7 @@
 /** A net label: the net it is wired to takes its name; double-click to rename. */
 import { Handle, type NodeProps, Position } from "@xyflow/react";
 import { memo } from "react";
-import { LABEL_HANDLE, type LabelFlowNode } from "./flow-model";
+import { LABEL_HANDLE, LABEL_PIN_OFFSET, type LabelFlowNode } from "./flow-model";
 
 function LabelNodeView({ selected, data }: NodeProps<LabelFlowNode>) {
   return (
@@ -17,7 +17,7 @@ function LabelNodeView({ selected, data }: NodeProps<LabelFlowNode>) {
         id={LABEL_HANDLE}
         type="source"
         position={Position.Left}
-        style={{ left: 0, top: "50%", transform: "translate(-50%, -50%)" }}
+        style={{ left: LABEL_PIN_OFFSET.x, top: LABEL_PIN_OFFSET.y, transform: "translate(-50%, -50%)" }}
         className="bench-handle"
         aria-label={`net label ${data.net}`}
       />

@@ -7,6 +7,7 @@ import { Handle, type NodeProps, Position } from "@xyflow/react";
 import { memo } from "react";
 import { KIND_SPECS } from "@/sim/circuit/kinds";
 import { pinLabel } from "../symbols/kind-names";
+import { labelLeft } from "../symbols/label-place";
 import { PartSymbol } from "../symbols/part-symbol";
 import { rotatedPinOffset, rotatedSide, rotatedSize, SYMBOL_BOXES, type Side } from "../symbols/pin-layout";
 import type { PartFlowNode } from "./flow-model";
@@ -31,6 +32,7 @@ function PartNodeView({ data, selected }: NodeProps<PartFlowNode>) {
   const box = SYMBOL_BOXES[part.kind];
   const size = rotatedSize(part.kind, placement.rotation);
   const type = typeof part.values.type === "string" ? part.values.type : undefined;
+  const labelAt = labelLeft(part.kind, placement.rotation);
   const tone = error ? "text-caution" : part.enabled ? "text-ink" : "text-graphite/60";
   return (
     <div
@@ -77,8 +79,12 @@ function PartNodeView({ data, selected }: NodeProps<PartFlowNode>) {
           </Handle>
         );
       })}
-      {/* on a paper ground, so a wire drawn under the designator or value never strikes through the text */}
-      <div className="pointer-events-none absolute left-1/2 top-full mt-1 -translate-x-1/2 whitespace-nowrap rounded-sm bg-paper/90 px-1 text-center leading-tight">
+      {/* on a paper ground, so a wire drawn under the designator or value never strikes through the text; beside a
+          downward pin's wire rather than over it (label-place.ts) */}
+      <div
+        className={`pointer-events-none absolute top-full mt-1 whitespace-nowrap rounded-sm bg-paper/90 px-1 leading-tight ${labelAt === null ? "left-1/2 -translate-x-1/2 text-center" : "text-left"}`}
+        style={labelAt === null ? undefined : { left: labelAt }}
+      >
         <div className={`font-mono text-[11px] font-medium ${error ? "text-caution" : "text-ink"}`}>
           {part.id}
           {!part.enabled && <span className="ml-1 text-graphite">(off)</span>}

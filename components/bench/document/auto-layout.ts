@@ -10,9 +10,13 @@ import type { BenchCircuit, BenchPart } from "./circuit";
 import { nextFreeId } from "./ids";
 import { type BenchLayout, emptyLayout, GRID, type Placement, type Wire } from "./layout";
 
-/** Distance between columns and rows, canvas units (room for the symbol, its labels and the wires). */
+/**
+ * Distance between columns and rows, canvas units (room for the symbol, its labels and the wires). A row holds the
+ * tallest upright symbol (100), the ground symbol under it (GROUND_DROP + 40) and a grid of room for a wire before
+ * the next row: 200 let a ground touch the pin of the part below.
+ */
 const COLUMN_STEP = 260;
-const ROW_STEP = 200;
+const ROW_STEP = 240;
 /** How far below its part a ground symbol sits. */
 const GROUND_DROP = 60;
 
@@ -96,7 +100,10 @@ export function drawNets(circuit: BenchCircuit, placements: Record<string, Place
       const at = placements[part.id] ?? { x: 0, y: 0 };
       const box = SYMBOL_BOXES[part.kind];
       const first = pinPoint(part, groundPins[0][0]);
-      layout.grounds[groundId] = { x: snap(first.x - GRID), y: snap(at.y + box.height + GROUND_DROP) };
+      // under the pin, one grid step out for a side pin, so its wire leaves the pin and turns down once
+      const side = box.pins[groundPins[0][0]]?.side;
+      const out = side === "right" ? GRID : side === "left" ? -GRID : 0;
+      layout.grounds[groundId] = { x: snap(first.x + out - GRID), y: snap(at.y + box.height + GROUND_DROP) };
       for (const [pin] of groundPins) {
         wires.push({ id: wireId(), from: { kind: "pin", part: part.id, pin }, to: { kind: "ground", id: groundId } });
       }

@@ -79,7 +79,9 @@ describe("free spot for a new item", () => {
     expect(r.height).toBeGreaterThan(100);
     // the JFET's key value (its channel and pinch-off) is longer than its 100-unit symbol is wide
     expect(r.width).toBeGreaterThan(100);
-    expect(r.x).toBeLessThan(0);
+    // the source pin faces down, so the text starts beside its wire and runs on past the symbol's right side
+    expect(r.x).toBe(0);
+    expect(r.x + r.width).toBeGreaterThan(100);
     const beside = freeShift({ x: 120, y: 0, width: 100, height: 140 }, [r]);
     expect(apart({ x: 120 + beside.dx, y: beside.dy, width: 100, height: 140 }, r, CLEARANCE)).toBe(true);
   });

@@ -5,6 +5,7 @@
  * box: the designator and key value under a part, which can be wider than a small symbol.
  */
 import { keyValueText } from "../symbols/key-value";
+import { labelLeft } from "../symbols/label-place";
 import { rotatedSize } from "../symbols/pin-layout";
 import type { BenchPart, RawValue } from "./circuit";
 import { type BenchLayout, GRID, type Placement } from "./layout";
@@ -36,16 +37,29 @@ const SEARCH_STEPS = 40;
 
 /** What a part occupies at `placement`: its box, and the label under it centred on the box. */
 export function partFootprint(part: BenchPart, placement: Placement, parameters: Record<string, RawValue>): Rect {
+  return partFootprintWithText(part, placement, keyValueText(part, parameters));
+}
+
+/** `partFootprint` when the key value's text is known already (the canvas has it; no second parse). */
+export function partFootprintWithText(part: BenchPart, placement: Placement, keyText: string): Rect {
+  const size = rotatedSize(part.kind, placement.rotation);
+  const label = partLabelRect(part, placement, keyText);
+  const x = Math.min(placement.x, label.x);
+  const right = Math.max(placement.x + size.width, label.x + label.width);
+  return { x, y: placement.y, width: right - x, height: size.height + PART_LABEL_BAND };
+}
+
+/**
+ * The designator and key value under a part: centred under the symbol, or starting beside its downward pin
+ * (label-place.ts), in either case as wide as its longer line.
+ */
+export function partLabelRect(part: BenchPart, placement: Placement, keyText: string): Rect {
   const size = rotatedSize(part.kind, placement.rotation);
   const id = part.enabled ? part.id : `${part.id} (off)`;
-  const letters = Math.max(id.length, keyValueText(part, parameters).length);
-  const width = Math.max(size.width, letters * MONO_LETTER + LABEL_PADDING);
-  return {
-    x: placement.x + (size.width - width) / 2,
-    y: placement.y,
-    width,
-    height: size.height + PART_LABEL_BAND,
-  };
+  const width = Math.max(id.length, keyText.length) * MONO_LETTER + LABEL_PADDING;
+  const left = labelLeft(part.kind, placement.rotation);
+  const x = left === null ? placement.x + (size.width - width) / 2 : placement.x + left;
+  return { x, y: placement.y + size.height, width, height: PART_LABEL_BAND };
 }
 
 export function groundFootprint(at: { x: number; y: number }): Rect {
