@@ -59,7 +59,13 @@ async function nodeBoxes(page: Page): Promise<Box[]> {
   return page.evaluate(() =>
     [...document.querySelectorAll(".react-flow__node")].map((node) => {
       const r = node.getBoundingClientRect();
-      const box = { id: node.getAttribute("data-id") ?? "", left: r.left, top: r.top, right: r.right, bottom: r.bottom };
+      const box = {
+        id: node.getAttribute("data-id") ?? "",
+        left: r.left,
+        top: r.top,
+        right: r.right,
+        bottom: r.bottom,
+      };
       for (const inner of node.querySelectorAll("*")) {
         const e = inner.getBoundingClientRect();
         if (e.width === 0 && e.height === 0) continue;
@@ -69,6 +75,27 @@ async function nodeBoxes(page: Page): Promise<Box[]> {
         box.bottom = Math.max(box.bottom, e.bottom);
       }
       return box;
+    }),
+  );
+}
+
+/** Each canvas node's own box (the symbol's, for a part), without what is drawn outside it. */
+async function nodeRects(page: Page): Promise<Box[]> {
+  return page.evaluate(() =>
+    [...document.querySelectorAll(".react-flow__node")].map((node) => {
+      const r = node.getBoundingClientRect();
+      return { id: node.getAttribute("data-id") ?? "", left: r.left, top: r.top, right: r.right, bottom: r.bottom };
+    }),
+  );
+}
+
+/** The box of each part's designator and value as drawn ("R1 label"). */
+async function labelBoxes(page: Page): Promise<Box[]> {
+  return page.evaluate(() =>
+    [...document.querySelectorAll('[data-testid^="value-"]')].map((value) => {
+      const r = (value.parentElement as HTMLElement).getBoundingClientRect();
+      const id = `${value.getAttribute("data-testid")?.slice("value-".length)} label`;
+      return { id, left: r.left, top: r.top, right: r.right, bottom: r.bottom };
     }),
   );
 }
@@ -167,6 +194,19 @@ describe("drawing on the bench", () => {
     await expect(page.getByTestId("value-IN1").textContent()).resolves.toBe("2.2 kΩ");
     await page.locator("#sheet-value-resistance").fill("2k2");
     await page.locator("#sheet-value-resistance").press("Enter");
+
+    // the capsule's value has grown longer than the room beside it ("50 pF · electret 100 V"): its label is cut
+    // short, still holding the whole text, and no label lies over another label or another item's symbol
+    await expect(page.getByTestId("value-MIC1").textContent()).resolves.toBe("50 pF · electret 100 V");
+    await expect(page.locator('[data-part="MIC1"] [data-label-cut]').count()).resolves.toBe(1);
+    const labels = await labelBoxes(page);
+    expect(labels).toHaveLength(5);
+    const symbols = (await nodeRects(page)).filter((b) => b.id.startsWith("p:"));
+    expect(overlapping([...labels]), JSON.stringify(labels)).toEqual([]);
+    for (const label of labels)
+      for (const symbol of symbols)
+        if (`p:${label.id.replace(/ label$/, "")}` !== symbol.id)
+          expect(overlapping([label, symbol]), `${label.id} over ${symbol.id}`).toEqual([]);
 
     // the output: the follower's source
     await page.locator(".react-flow__pane").click({ position: { x: 900, y: 500 } });

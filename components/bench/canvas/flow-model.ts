@@ -7,9 +7,12 @@ import type { SimErrorJson } from "@/sim/errors";
 import { GROUND } from "@/sim/circuit/types";
 import type { BenchPart, RawValue } from "../document/circuit";
 import type { BenchDocument } from "../document/document";
+import { groundFootprint, labelFootprint, type Rect } from "../document/free-spot";
+import { labelWidths } from "../document/label-room";
 import type { Endpoint, Placement } from "../document/layout";
 import type { ItemRef, Selection } from "../store/selection";
 import { keyValueText } from "../symbols/key-value";
+import { rotatedSize } from "../symbols/pin-layout";
 import { type RoutedWire, svgPath } from "../wiring/orthogonal-router";
 
 export const GROUND_HANDLE = "gnd";
@@ -22,6 +25,8 @@ export interface PartNodeData extends Record<string, unknown> {
   part: BenchPart;
   placement: Placement;
   keyText: string;
+  /** null, or the width the designator and value are cut back to where a neighbour leaves no room (label-room.ts) */
+  labelWidth: number | null;
   error: string | null;
 }
 export interface GroundNodeData extends Record<string, unknown> {
@@ -78,6 +83,19 @@ export function netOfEndpoint(document: BenchDocument, endpoint: Endpoint): stri
   return document.circuit.parts.find((p) => p.id === endpoint.part)?.pins[endpoint.pin];
 }
 
+/** Every drawn item's box without the text under a part: what a part's label must keep clear of. */
+function itemBoxes(document: BenchDocument, parts: readonly { part: BenchPart; placement: Placement }[]): Rect[] {
+  return [
+    ...parts.map(({ part, placement }) => ({
+      x: placement.x,
+      y: placement.y,
+      ...rotatedSize(part.kind, placement.rotation),
+    })),
+    ...Object.values(document.layout.grounds).map(groundFootprint),
+    ...Object.values(document.layout.netLabels).map((l) => labelFootprint(l.net, l)),
+  ];
+}
+
 export function toFlowNodes(
   document: BenchDocument,
   selection: Selection,
@@ -88,8 +106,13 @@ export function toFlowNodes(
   const selectedGrounds = new Set(selection.grounds);
   const selectedLabels = new Set(selection.labels);
   const nodes: BenchFlowNode[] = [];
-  for (const part of document.circuit.parts) {
-    const placement = document.layout.parts[part.id] ?? { x: 0, y: 0, rotation: 0 };
+  const labelled = document.circuit.parts.map((part) => ({
+    part,
+    placement: document.layout.parts[part.id] ?? { x: 0, y: 0, rotation: 0 },
+    keyText: keyValueText(part, parameters),
+  }));
+  const widths = labelWidths(labelled, itemBoxes(document, labelled));
+  for (const { part, placement, keyText } of labelled) {
     nodes.push({
       id: `p:${part.id}`,
       type: "part",
@@ -99,7 +122,8 @@ export function toFlowNodes(
       data: {
         part,
         placement,
-        keyText: keyValueText(part, parameters),
+        keyText,
+        labelWidth: widths.get(part.id) ?? null,
         error: error?.part === part.id ? error.message : null,
       },
     });
@@ -193,7 +217,11 @@ function sameEdge(a: WireFlowEdge, b: WireFlowEdge): boolean {
  * `next` with every item that draws the same as in `previous` replaced by the previous object, so a value change
  * re-renders (and React Flow re-measures) only the nodes and wires it touched, not the whole drawing.
  */
-function keepUnchanged<T extends { id: string }>(previous: readonly T[], next: T[], same: (a: T, b: T) => boolean): T[] {
+function keepUnchanged<T extends { id: string }>(
+  previous: readonly T[],
+  next: T[],
+  same: (a: T, b: T) => boolean,
+): T[] {
   const before = new Map(previous.map((item) => [item.id, item]));
   return next.map((item) => {
     const old = before.get(item.id);

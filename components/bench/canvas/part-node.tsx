@@ -28,11 +28,12 @@ const PIN_NAME_OFFSET: Record<Side, string> = {
 };
 
 function PartNodeView({ data, selected }: NodeProps<PartFlowNode>) {
-  const { part, placement, keyText, error } = data;
+  const { part, placement, keyText, labelWidth, error } = data;
   const box = SYMBOL_BOXES[part.kind];
   const size = rotatedSize(part.kind, placement.rotation);
   const type = typeof part.values.type === "string" ? part.values.type : undefined;
   const labelAt = labelLeft(part.kind, placement.rotation);
+  const cut = labelWidth !== null;
   const tone = error ? "text-caution" : part.enabled ? "text-ink" : "text-graphite/60";
   return (
     <div
@@ -80,16 +81,19 @@ function PartNodeView({ data, selected }: NodeProps<PartFlowNode>) {
         );
       })}
       {/* on a paper ground, so a wire drawn under the designator or value never strikes through the text; beside a
-          downward pin's wire rather than over it (label-place.ts) */}
+          downward pin's wire rather than over it (label-place.ts); no wider than the room beside it (label-room.ts),
+          ending in an ellipsis with the whole text on hover when it is cut */}
       <div
-        className={`pointer-events-none absolute top-full mt-1 whitespace-nowrap rounded-sm bg-paper/90 px-1 leading-tight ${labelAt === null ? "left-1/2 -translate-x-1/2 text-center" : "text-left"}`}
-        style={labelAt === null ? undefined : { left: labelAt }}
+        className={`absolute top-full mt-1 overflow-hidden whitespace-nowrap rounded-sm bg-paper/90 px-1 leading-tight ${labelAt === null ? "left-1/2 -translate-x-1/2 text-center" : "text-left"} ${cut ? "" : "pointer-events-none"}`}
+        style={{ maxWidth: labelWidth ?? undefined, ...(labelAt === null ? {} : { left: labelAt }) }}
+        title={cut ? `${part.id}: ${keyText}` : undefined}
+        data-label-cut={cut ? "" : undefined}
       >
-        <div className={`font-mono text-[11px] font-medium ${error ? "text-caution" : "text-ink"}`}>
+        <div className={`truncate font-mono text-[11px] font-medium ${error ? "text-caution" : "text-ink"}`}>
           {part.id}
           {!part.enabled && <span className="ml-1 text-graphite">(off)</span>}
         </div>
-        <div className="font-mono text-[10px] text-ink-soft" data-testid={`value-${part.id}`}>
+        <div className="truncate font-mono text-[10px] text-ink-soft" data-testid={`value-${part.id}`}>
           {keyText}
         </div>
       </div>

@@ -65,13 +65,17 @@ function pinNameOverhangs(node: PartFlowNode, size: { width: number; height: num
 }
 
 function partObstacles(node: PartFlowNode): Obstacle[] {
-  const { part, placement, keyText } = node.data;
+  const { part, placement, keyText, labelWidth } = node.data;
   const size = rotatedSize(part.kind, placement.rotation);
   const label = partLabelRect(part, placement, keyText);
   const left = labelLeft(part.kind, placement.rotation);
-  // never narrower than the symbol above it: a short value's edit then moves nothing at all
+  // never narrower than the symbol above it: a short value's edit then moves nothing at all; a label cut back to
+  // its room (label-room.ts) is kept at exactly that width, since rounding it up would reach into its neighbour
   const under = left === null ? size.width : Math.max(0, size.width - left);
-  const width = Math.max(under, Math.ceil(label.width / LABEL_STEP) * LABEL_STEP);
+  const width =
+    labelWidth !== null
+      ? Math.max(under, labelWidth)
+      : Math.max(under, Math.ceil(label.width / LABEL_STEP) * LABEL_STEP);
   const x = left === null ? label.x + (label.width - width) / 2 : label.x;
   return [
     { id: node.id, x: placement.x, y: placement.y, ...size },
