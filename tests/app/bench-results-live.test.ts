@@ -233,12 +233,18 @@ describe("bench live results in Chromium", () => {
     const overflow = await phone.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow).toBeLessThanOrEqual(0);
     await phone.screenshot({ path: screenshotPath("bench-results-phone"), fullPage: true });
-    // The fitted drawing is whole on the phone's canvas (an overview; pinch or + to read it).
+    // The fitted drawing is whole on the phone's canvas (an overview; pinch or + to read it): every part, every
+    // designator and value, and every wire, including those that loop round the outside of the parts.
     const fit = await phone.evaluate(() => {
       const pane = document.querySelector(".react-flow")!.getBoundingClientRect();
       const transform = getComputedStyle(document.querySelector(".react-flow__viewport")!).transform;
       const zoom = new DOMMatrix(transform).a;
-      const cut = [...document.querySelectorAll(".react-flow__node")].filter((node) => {
+      const drawn = [
+        ...document.querySelectorAll(".react-flow__node"),
+        ...[...document.querySelectorAll('[data-testid^="value-"]')].map((v) => v.parentElement as Element),
+        ...document.querySelectorAll(".react-flow__edge-path"),
+      ];
+      const cut = drawn.filter((node) => {
         const box = node.getBoundingClientRect();
         return (
           box.left < pane.left - 1 ||
@@ -247,7 +253,11 @@ describe("bench live results in Chromium", () => {
           box.bottom > pane.bottom + 1
         );
       });
-      return { zoom, cut: cut.map((node) => node.getAttribute("data-id")) };
+      const name = (e: Element) =>
+        e.getAttribute("data-id") ??
+        e.closest(".react-flow__edge")?.getAttribute("data-id") ??
+        e.querySelector('[data-testid^="value-"]')?.getAttribute("data-testid");
+      return { zoom, cut: cut.map(name) };
     });
     expect(fit.cut).toEqual([]);
     expect(fit.zoom).toBeGreaterThan(0.2);

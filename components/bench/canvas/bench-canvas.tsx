@@ -12,16 +12,18 @@ import {
   type Connection,
   ConnectionLineType,
   ConnectionMode,
+  ControlButton,
   Controls,
   type EdgeChange,
   type NodeChange,
+  getViewportForBounds,
   ReactFlow,
   useReactFlow,
 } from "@xyflow/react";
 import { type DragEvent, type KeyboardEvent, useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { SimErrorJson } from "@/sim/errors";
 import { PART_KINDS, type PartKind } from "@/sim/circuit/types";
-import { boxCentredOn, groundCentredOn } from "../document/free-spot";
+import { boxCentredOn, groundCentredOn, type Rect } from "../document/free-spot";
 import { GRID } from "../document/layout";
 import { nextFreeId } from "../document/ids";
 import { netNames } from "../document/nets";
@@ -70,6 +72,15 @@ function canvasWidth(): number {
 /** The canvas is fitted again when its width changes by more than this share (a phone turned, a window snapped). */
 const REFIT_WIDTH_CHANGE = 0.25;
 
+/** Four corners drawn inward: the whole drawing brought into view. */
+function FitIcon() {
+  return (
+    <svg viewBox="0 0 16 16" aria-hidden="true" fill="none" stroke="currentColor" strokeWidth="1.6">
+      <path d="M2 6V2h4M10 2h4v4M14 10v4h-4M6 14H2v-4" />
+    </svg>
+  );
+}
+
 function isTyping(target: EventTarget | null): boolean {
   const element = target as HTMLElement | null;
   return !!element && (element.isContentEditable || ["INPUT", "TEXTAREA", "SELECT"].includes(element.tagName));
@@ -84,6 +95,20 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
   const [help, setHelp] = useState(false);
   // the canvas takes keyboard focus when its background is clicked, so shortcuts reach it
   const surface = useRef<HTMLElement>(null);
+  // the whole drawing's box as last routed, for fitting the view from callbacks
+  const drawing = useRef<Rect | null>(null);
+
+  // fits the whole drawing, wires and labels included (drawing-bounds.ts): React Flow's fitView sees node boxes only
+  const fitDrawing = useCallback(() => {
+    const element = surface.current;
+    const box = drawing.current;
+    const options = fitOptionsFor(canvasWidth());
+    if (!element || !box || element.clientWidth === 0) return;
+    const { clientWidth, clientHeight } = element;
+    flow.setViewport(
+      getViewportForBounds(box, clientWidth, clientHeight, options.minZoom, options.maxZoom, options.padding),
+    );
+  }, [flow]);
 
   // a drawing fitted to a 1440-wide window is mostly off screen on a 390-wide one: refit on a large width change,
   // but not on small ones, so a view the user zoomed into stays put while a window is nudged
@@ -99,12 +124,12 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
       }
       if (Math.abs(width - fittedWidth) / fittedWidth > REFIT_WIDTH_CHANGE) {
         fittedWidth = width;
-        requestAnimationFrame(() => flow.fitView(fitOptionsFor(width)));
+        requestAnimationFrame(fitDrawing);
       }
     });
     observer.observe(element);
     return () => observer.disconnect();
-  }, [flow]);
+  }, [fitDrawing]);
 
   // unchanged nodes and wires keep their objects from the last render (React Flow then leaves them alone)
   const lastNodes = useRef<BenchFlowNode[]>([]);
@@ -116,7 +141,18 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
     );
     return lastNodes.current;
   }, [document, selection, error]);
-  const routes = useWireRoutes(document, nodes);
+  const { routes, bounds } = useWireRoutes(document, nodes);
+  drawing.current = bounds;
+  // fitted once the canvas is ready and something is drawn (at once, or when a starting point is chosen)
+  const [flowReady, setFlowReady] = useState(false);
+  const fittedOnce = useRef(false);
+  const hasDrawing = bounds !== null;
+  useEffect(() => {
+    if (!flowReady || !hasDrawing || fittedOnce.current) return;
+    fittedOnce.current = true;
+    fitDrawing();
+  }, [flowReady, hasDrawing, fitDrawing]);
+
   const edges = useMemo(() => {
     lastEdges.current = keepUnchangedEdges(lastEdges.current, toFlowEdges(document, selection, error, routes));
     return lastEdges.current;
@@ -236,7 +272,7 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
         state.clearSelection();
         break;
       case "fit":
-        flow.fitView(fitOptionsFor(canvasWidth()));
+        fitDrawing();
         break;
       case "rotate":
         state.rotatePart();
@@ -311,14 +347,22 @@ export function BenchCanvas({ error }: { error: SimErrorJson | null }) {
         deleteKeyCode={null}
         selectionKeyCode="Shift"
         multiSelectionKeyCode={["Shift", "Meta", "Control"]}
-        fitView
-        fitViewOptions={fitOptionsFor(canvasWidth())}
+        onInit={() => setFlowReady(true)}
         minZoom={0.2}
         maxZoom={3}
         proOptions={{ hideAttribution: true }}
       >
         <Background variant={BackgroundVariant.Dots} gap={GRID} size={1} color="var(--color-rule)" />
-        <Controls showInteractive={false} position="bottom-right" aria-label="Zoom" />
+        <Controls showInteractive={false} showFitView={false} position="bottom-right" aria-label="Zoom">
+          <ControlButton
+            className="react-flow__controls-fitview"
+            onClick={fitDrawing}
+            title="Zoom to fit (F)"
+            aria-label="Zoom to fit"
+          >
+            <FitIcon />
+          </ControlButton>
+        </Controls>
       </ReactFlow>
       {netError && (
         <div
