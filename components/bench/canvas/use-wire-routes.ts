@@ -26,7 +26,7 @@ export function useWireRoutes(document: BenchDocument, nodes: readonly BenchFlow
     const scene = wireScene(document, nodes);
     const key = sceneKey(scene);
     if (last.current?.key !== key) {
-      const routes = routeWires(scene.obstacles, scene.wires);
+      const routes = routeWires(scene.obstacles, scene.wires, undefined, scene.freePins);
       last.current = { key, routed: { routes, bounds: drawingBounds(scene.obstacles, routes) } };
     }
     return last.current.routed;

@@ -56,7 +56,7 @@ describe("the wire scene of a bench document", () => {
 
   it("routes every wire of the demo circuit clear of every other item", () => {
     const scene = sceneOf(demoDocument());
-    const routes = routeWires(scene.obstacles, scene.wires);
+    const routes = routeWires(scene.obstacles, scene.wires, undefined, scene.freePins);
     for (const wire of scene.wires) {
       const route = routes.get(wire.id);
       expect(route?.routed, wire.id).toBe(true);
@@ -75,5 +75,22 @@ describe("the wire scene of a bench document", () => {
         }
       }
     }
+  });
+
+  it("lists the pins no wire reaches, and only those, as free", () => {
+    const document = demoDocument();
+    // the demo is wired throughout: no free pin
+    expect(sceneOf(document).freePins).toEqual([]);
+    // a resistor dropped beside it, unwired: its two pins, the left and right middle of its 120 × 40 box
+    const circuit = {
+      ...document.circuit,
+      parts: [...document.circuit.parts, { ...document.circuit.parts.find((p) => p.id === "RG")!, id: "RX" }],
+    };
+    const layout = { ...document.layout, parts: { ...document.layout.parts, RX: { x: 2000, y: 2000, rotation: 0 as const } } };
+    const free = sceneOf({ circuit, layout }).freePins;
+    expect(free).toEqual([
+      { x: 2000, y: 2020 },
+      { x: 2120, y: 2020 },
+    ]);
   });
 });

@@ -9,7 +9,7 @@ import { groundFootprint, labelFootprint, partLabelRect } from "../document/free
 import { GRID, type Endpoint } from "../document/layout";
 import { labelLeft } from "../symbols/label-place";
 import { rotatedPinOffset, rotatedSide, rotatedSize, SYMBOL_BOXES } from "../symbols/pin-layout";
-import type { Obstacle, WireEnd, WireRequest } from "../wiring/orthogonal-router";
+import type { Obstacle, Point, WireEnd, WireRequest } from "../wiring/orthogonal-router";
 import {
   type BenchFlowNode,
   GROUND_PIN_OFFSET,
@@ -22,6 +22,8 @@ import {
 export interface WireScene {
   obstacles: Obstacle[];
   wires: WireRequest[];
+  /** the pins no wire reaches yet, which no route may pass through */
+  freePins: Point[];
 }
 
 /**
@@ -124,7 +126,23 @@ export function wireScene(document: BenchDocument, nodes: readonly BenchFlowNode
     const net = netOfEndpoint(document, wire.from) ?? netOfEndpoint(document, wire.to) ?? wire.id;
     wires.push({ id: wire.id, net, from, to });
   }
-  return { obstacles: nodes.flatMap(obstaclesOf), wires };
+  const wired = new Set(wires.flatMap((w) => [pointKey(w.from.point), pointKey(w.to.point)]));
+  const freePins = nodes.flatMap(pinPoints).filter((p) => !wired.has(pointKey(p)));
+  return { obstacles: nodes.flatMap(obstaclesOf), wires, freePins };
+}
+
+const pointKey = (p: Point) => `${p.x},${p.y}`;
+
+/** Where every pin of a drawn item sits on the canvas. */
+function pinPoints(node: BenchFlowNode): Point[] {
+  const { x, y } = node.position;
+  if (node.type === "ground") return [{ x: x + GROUND_PIN_OFFSET.x, y: y + GROUND_PIN_OFFSET.y }];
+  if (node.type === "netLabel") return [{ x: x + LABEL_PIN_OFFSET.x, y: y + LABEL_PIN_OFFSET.y }];
+  const { part, placement } = node.data;
+  return Object.keys(SYMBOL_BOXES[part.kind].pins).map((pin) => {
+    const offset = rotatedPinOffset(part.kind, pin, placement.rotation);
+    return { x: placement.x + offset.x, y: placement.y + offset.y };
+  });
 }
 
 /** A string equal for two scenes exactly when they route the same. */
@@ -133,5 +151,6 @@ export function sceneKey(scene: WireScene): string {
   return [
     ...scene.obstacles.map((o) => `${o.id}:${o.x},${o.y},${o.width},${o.height}`),
     ...scene.wires.map((w) => `${w.id}:${w.net}:${end(w.from)}:${end(w.to)}`),
+    scene.freePins.map(pointKey).join(";"),
   ].join("|");
 }

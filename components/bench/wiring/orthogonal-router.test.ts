@@ -87,6 +87,27 @@ describe("orthogonal wire router", () => {
     ]);
   });
 
+  it("never passes through a pin that no wire reaches yet", () => {
+    // A's right pin to B's top pin: the shortest way runs right along y = 20, then down; a free pin on that line
+    // (given alone here, as the bench gives the pins of its items) must be stepped round
+    const boxes = [box("A", 0, 0, 120, 40), box("B", 300, 100, 120, 40)];
+    const wire: WireRequest = { id: "w", net: "n", from: end(120, 20, "right", "A"), to: end(360, 100, "top", "B") };
+    const onLine = (route: RoutedWire, p: { x: number; y: number }) =>
+      segments(route).some(
+        ([a, b]) =>
+          p.x >= Math.min(a.x, b.x) &&
+          p.x <= Math.max(a.x, b.x) &&
+          p.y >= Math.min(a.y, b.y) &&
+          p.y <= Math.max(a.y, b.y),
+      );
+    const pin = { x: 240, y: 20 };
+    expect(onLine(routeWires(boxes, [wire]).get("w") as RoutedWire, pin)).toBe(true);
+    const route = routeWires(boxes, [wire], undefined, [pin]).get("w") as RoutedWire;
+    expect(route.routed).toBe(true);
+    expect(isOrthogonal(route)).toBe(true);
+    expect(onLine(route, pin)).toBe(false);
+  });
+
   it("goes round a box in the way, keeping the clearance, and is as short as the shortest clear path", () => {
     const blocker = box("X", 180, -60, 60, 160);
     const boxes = [box("A", 0, 0, 120, 40), blocker, box("B", 300, 0, 120, 40)];

@@ -112,7 +112,12 @@ function inside(o: Obstacle, x: number, y: number, clearance: number): boolean {
 }
 
 /** The grid points, and which of them lie inside an item. */
-function buildGrid(obstacles: readonly Obstacle[], wires: readonly WireRequest[], options: RouteOptions): Grid {
+function buildGrid(
+  obstacles: readonly Obstacle[],
+  wires: readonly WireRequest[],
+  options: RouteOptions,
+  freePins: readonly Point[],
+): Grid {
   const ends = wires.flatMap((w) => [w.from.point, w.to.point]);
   const allX = [...obstacles.flatMap((o) => [o.x, o.x + o.width]), ...ends.map((p) => p.x)];
   const allY = [...obstacles.flatMap((o) => [o.y, o.y + o.height]), ...ends.map((p) => p.y)];
@@ -134,6 +139,12 @@ function buildGrid(obstacles: readonly Obstacle[], wires: readonly WireRequest[]
   const xAt = new Map(xs.map((x, i) => [x, i]));
   const yAt = new Map(ys.map((y, i) => [y, i]));
   for (const p of ends) blocked[(yAt.get(p.y) as number) * xs.length + (xAt.get(p.x) as number)] = HARD;
+  // so is a pin no wire reaches yet (it sits on the grid, as every pin does; one off it no route can touch)
+  for (const p of freePins) {
+    const ix = xAt.get(p.x);
+    const iy = yAt.get(p.y);
+    if (ix !== undefined && iy !== undefined) blocked[iy * xs.length + ix] = HARD;
+  }
   return {
     xs,
     ys,
@@ -404,10 +415,12 @@ export function routeWires(
   obstacles: readonly Obstacle[],
   wires: readonly WireRequest[],
   options: RouteOptions = DEFAULT_ROUTE_OPTIONS,
+  /** pins with no wire yet: no route passes through one (it would look joined to it) */
+  freePins: readonly Point[] = [],
 ): Map<string, RoutedWire> {
   const routes = new Map<string, RoutedWire>();
   if (wires.length === 0) return routes;
-  const grid = buildGrid(obstacles, wires, options);
+  const grid = buildGrid(obstacles, wires, options, freePins);
   const nx = grid.xs.length;
   const occupancy = new Occupancy(grid.blocked.length);
   const scratch = new SearchScratch(grid.blocked.length * 4);
