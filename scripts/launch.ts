@@ -1,6 +1,8 @@
 /**
  * Starts everything for a person trying Backplate: PostgreSQL, migrations, the demo seed, a build when the sources
- * changed, and the server on http://127.0.0.1:3000. Ctrl-C stops all of it. `--dev` serves with the dev server.
+ * changed, and the server on http://127.0.0.1:3000. Ctrl-C stops all of it. `--dev` serves with the dev server;
+ * `--workers N` serves the build from N processes sharing the port (scripts/lib/next-cluster.mjs), for a machine
+ * with cores to spare.
  */
 import { type ChildProcess, spawn } from "node:child_process";
 import { randomBytes } from "node:crypto";
@@ -13,6 +15,18 @@ import { launcherConfig, PROJECT_ROOT } from "./lib/config";
 import { startDevServices } from "./lib/services";
 
 const dev = process.argv.includes("--dev");
+
+/** `--workers N`: how many server processes share the port (1 unless asked). */
+function workersOption(): number {
+  const at = process.argv.indexOf("--workers");
+  if (at < 0) return 1;
+  const value = Number(process.argv[at + 1]);
+  if (!Number.isInteger(value) || value < 1 || value > 64) {
+    throw new Error("--workers needs a whole number from 1 to 64, such as --workers 2 (one per core to spare).");
+  }
+  if (dev && value > 1) throw new Error("--workers serves the production build; leave it out with --dev.");
+  return value;
+}
 const log = (line: string) => console.log(`[backplate] ${line}`);
 
 /** A stable secret for signed cookies, made once per clone unless NEXTAUTH_SECRET is set. */
@@ -27,6 +41,7 @@ function sessionSecret(): string {
 }
 
 async function main() {
+  const workers = workersOption();
   const services = await startDevServices(log);
   await seedDemo(services.databaseUrl);
   log("Demo data seeded");
@@ -35,7 +50,10 @@ async function main() {
   const { host, port } = launcherConfig;
   const url = `http://${host}:${port}`;
   const next = path.join(PROJECT_ROOT, "node_modules", ".bin", "next");
-  const server: ChildProcess = spawn(next, [dev ? "dev" : "start", "-H", host, "-p", String(port)], {
+  const serve = [dev ? "dev" : "start", "-H", host, "-p", String(port)];
+  const cluster = path.join(PROJECT_ROOT, "scripts", "lib", "next-cluster.mjs");
+  const [command, args] = workers > 1 ? [process.execPath, [cluster, String(workers), ...serve]] : [next, serve];
+  const server: ChildProcess = spawn(command, args, {
     cwd: PROJECT_ROOT,
     stdio: "inherit",
     env: {
@@ -61,7 +79,7 @@ async function main() {
   process.on("SIGTERM", () => void stop(0));
   server.on("exit", (code) => void stop(code ?? 0));
 
-  log(`Backplate is at ${url}`);
+  log(`Backplate is at ${url}${workers > 1 ? ` (${workers} server processes)` : ""}`);
   log(`Demo sign-in (password for all: ${DEMO_PASSWORD}):`);
   for (const person of DEMO_PEOPLE) log(`  ${person.role.padEnd(9)} ${person.email}  (${person.name})`);
   log("Press Ctrl-C to stop the app and the services it started.");

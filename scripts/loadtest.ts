@@ -3,7 +3,8 @@
  * sources changed) on 127.0.0.1, then the scenarios of scripts/lib/loadtest.ts in their full form. Prints each
  * scenario's throughput, latency and errors, writes tests/output/loadtest.json, and exits 1 when a target is missed.
  * Options: --connections N (50), --duration S (10 per read scenario), --rounds N (20), --writers N (20),
- * --profile DIR (the server writes a V8 CPU profile there when it stops; open it in Chromium's dev tools).
+ * --profile DIR (the server writes a V8 CPU profile there when it stops; open it in Chromium's dev tools),
+ * --workers N (1: server processes sharing the port, scripts/lib/next-cluster.mjs).
  */
 import fs from "node:fs";
 import path from "node:path";
@@ -21,7 +22,8 @@ function option(name: string, fallback: number): number {
   const at = process.argv.indexOf(`--${name}`);
   if (at < 0) return fallback;
   const value = Number(process.argv[at + 1]);
-  if (!Number.isInteger(value) || value < 1) throw new Error(`--${name} needs a whole number of 1 or more, such as --${name} ${fallback}.`);
+  if (!Number.isInteger(value) || value < 1)
+    throw new Error(`--${name} needs a whole number of 1 or more, such as --${name} ${fallback}.`);
   return value;
 }
 
@@ -29,7 +31,8 @@ function textOption(name: string): string | undefined {
   const at = process.argv.indexOf(`--${name}`);
   if (at < 0) return undefined;
   const value = process.argv[at + 1];
-  if (!value || value.startsWith("--")) throw new Error(`--${name} needs a value, such as --${name} tests/output/profile.`);
+  if (!value || value.startsWith("--"))
+    throw new Error(`--${name} needs a value, such as --${name} tests/output/profile.`);
   return value;
 }
 
@@ -37,12 +40,20 @@ function missedTargets(report: LoadtestReport): string[] {
   const missed: string[] = [];
   for (const read of report.reads) {
     if (read.errors > 0) missed.push(`${read.name}: ${read.errors} errors (statuses ${JSON.stringify(read.statuses)})`);
-    if (read.latencyMs.p99 >= READ_P99_TARGET_MS) missed.push(`${read.name}: p99 ${read.latencyMs.p99} ms, target < ${READ_P99_TARGET_MS} ms`);
+    if (read.latencyMs.p99 >= READ_P99_TARGET_MS)
+      missed.push(`${read.name}: p99 ${read.latencyMs.p99} ms, target < ${READ_P99_TARGET_MS} ms`);
   }
   const w = report.writes;
-  if (w.cleanRounds !== w.rounds) missed.push(`saves: ${w.rounds - w.cleanRounds} rounds without exactly one 201 and the rest 409`);
+  if (w.cleanRounds !== w.rounds)
+    missed.push(`saves: ${w.rounds - w.cleanRounds} rounds without exactly one 201 and the rest 409`);
   const db = w.database;
-  if (db.revisions !== w.rounds + 1 || !db.numbersContiguous || !db.parentsChain || !db.winnersStored || !db.headIsLast) {
+  if (
+    db.revisions !== w.rounds + 1 ||
+    !db.numbersContiguous ||
+    !db.parentsChain ||
+    !db.winnersStored ||
+    !db.headIsLast
+  ) {
     missed.push(`saves: the database history is wrong (${JSON.stringify(db)})`);
   }
   return missed;
@@ -67,6 +78,7 @@ async function main() {
       env: services.env,
       secret: "loadtest-secret-not-for-production",
       nodeFlags: profileDir ? ["--cpu-prof", `--cpu-prof-dir=${path.resolve(profileDir)}`] : [],
+      workers: option("workers", 1),
     });
     try {
       log(`app at ${server.baseUrl}; ${JSON.stringify(options)}`);

@@ -9,9 +9,13 @@ import { PROJECT_ROOT } from "./config";
 import { freePort } from "./postgres";
 
 const READY_TIMEOUT_MS = 60_000;
+/** How long a server may take to stop after SIGTERM before it is killed. */
+const STOP_GRACE_MS = 3000;
 
 export interface AppServer {
   baseUrl: string;
+  /** the server's process (with several workers, their primary) */
+  pid: number;
   /** what the server printed so far (for failure messages) */
   log(): string;
   stop(): Promise<void>;
@@ -39,11 +43,16 @@ export async function startAppServer(options: {
   secret: string;
   /** extra Node.js flags for the server process (e.g. `--cpu-prof`, for `npm run loadtest -- --profile`) */
   nodeFlags?: string[];
+  /** server processes sharing the port (next-cluster.mjs); 1, the default, is plain `next start` */
+  workers?: number;
 }): Promise<AppServer> {
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
   const nextBin = path.join(PROJECT_ROOT, "node_modules", "next", "dist", "bin", "next");
-  const args = [...(options.nodeFlags ?? []), nextBin, "start", "-H", "127.0.0.1", "-p", String(port)];
+  const workers = options.workers ?? 1;
+  const launcher =
+    workers > 1 ? [path.join(PROJECT_ROOT, "scripts", "lib", "next-cluster.mjs"), String(workers)] : [nextBin];
+  const args = [...(options.nodeFlags ?? []), ...launcher, "start", "-H", "127.0.0.1", "-p", String(port)];
   const server = spawn(process.execPath, args, {
     cwd: PROJECT_ROOT,
     stdio: ["ignore", "pipe", "pipe"],
@@ -60,10 +69,16 @@ export async function startAppServer(options: {
   server.stdout?.on("data", (chunk) => (serverLog += chunk));
   server.stderr?.on("data", (chunk) => (serverLog += chunk));
   const stop = async () => {
-    if (server.exitCode !== null) return;
+    if (server.exitCode !== null || server.signalCode !== null) return;
     server.kill("SIGTERM");
-    await new Promise((resolve) => setTimeout(resolve, 300));
-    if (server.exitCode === null) server.kill("SIGKILL");
+    // a primary with workers takes a moment longer: it stops each worker first
+    for (
+      let waited = 0;
+      waited < STOP_GRACE_MS && server.exitCode === null && server.signalCode === null;
+      waited += 100
+    )
+      await new Promise((resolve) => setTimeout(resolve, 100));
+    if (server.exitCode === null && server.signalCode === null) server.kill("SIGKILL");
   };
   try {
     await waitForHealth(baseUrl, server);
@@ -71,5 +86,5 @@ export async function startAppServer(options: {
     await stop();
     throw new Error(`${error instanceof Error ? error.message : error}\n${serverLog}`);
   }
-  return { baseUrl, log: () => serverLog, stop };
+  return { baseUrl, pid: server.pid as number, log: () => serverLog, stop };
 }
