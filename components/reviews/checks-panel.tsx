@@ -1,3 +1,4 @@
+import { formatSi } from "@/components/bench/results/format";
 import { TARGET_FIGURE_LABELS, TARGET_FIGURES, type TargetFigure } from "@/components/schemas/targets";
 
 /** A stored check, as the server sends it (db/revision-checks.ts). */
@@ -18,16 +19,23 @@ export function figureUnit(figure: string): string {
   return TARGET_FIGURES[figure as TargetFigure] ?? "";
 }
 
+/** Units read with an SI prefix ("14.43 kHz", "11.88 mV/Pa"); levels in dB keep their plain number. */
+const PREFIXED_UNITS = new Set(["Hz", "Ω", "V/Pa"]);
+/** Significant figures of a figure or a limit on the review page, in the checks table and in the report. */
+const FIGURE_DIGITS = 4;
+
 export function formatFigure(value: unknown, figure: string): string {
   if (typeof value !== "number" || !Number.isFinite(value)) return value === null || value === undefined ? "—" : String(value);
-  return `${Number(value.toPrecision(4))} ${figureUnit(figure)}`.trim();
+  const unit = figureUnit(figure);
+  if (PREFIXED_UNITS.has(unit)) return formatSi(value, unit, FIGURE_DIGITS);
+  return `${Number(value.toPrecision(FIGURE_DIGITS))} ${unit}`.trim().replace("-", "−");
 }
 
 function limits(check: CheckRow): string {
-  const unit = figureUnit(check.figure);
-  if (check.min !== undefined && check.max !== undefined) return `${check.min} to ${check.max} ${unit}`;
-  if (check.min !== undefined) return `≥ ${check.min} ${unit}`;
-  return `≤ ${check.max} ${unit}`;
+  const { min, max, figure } = check;
+  if (min !== undefined && max !== undefined) return `${formatFigure(min, figure)} to ${formatFigure(max, figure)}`;
+  if (min !== undefined) return `≥ ${formatFigure(min, figure)}`;
+  return `≤ ${formatFigure(max, figure)}`;
 }
 
 /** "Targets met", "1 of 3 targets missed" or "No targets" — the badge the bench, the table and the review show. */

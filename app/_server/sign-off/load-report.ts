@@ -14,6 +14,7 @@ import { DEFAULT_CABLE_LENGTH_M, DESTINATION_PRESETS } from "@/components/bench/
 import { OVERLAY_COLOURS, PLOT_COLOURS } from "@/components/bench/plots/palette";
 import { formatFixed, formatSi } from "@/components/bench/results/format";
 import { runRevision } from "@/components/designs/run-revision";
+import { figureLabel, formatFigure } from "@/components/reviews/checks-panel";
 import { runSavedRevision } from "@/app/_server/revision-runs";
 import { type PlotSeries, plotGeometry } from "@/components/report/plot-geometry";
 import { anchorText, type ReportModel, type ReportPlot } from "@/components/report/report-model";
@@ -171,11 +172,12 @@ export async function loadReport(
       { label: "Polarity", value: typeof f.polarity === "string" ? f.polarity : "—" },
       { label: "Self-noise", value: formatFixed(num(f.self_noise_dba_spl), 1, "dB(A) SPL") },
     ],
+    // as the review page prints them: the figure's name, the value and the limits with their unit
     checks: (doc?.checks ?? []).map((c) => ({
-      figure: c.figure,
+      figure: figureLabel(c.figure),
       variant: c.variant ?? "base",
-      value: typeof c.value === "number" ? String(Number(c.value.toPrecision(4))) : String(c.value ?? "—"),
-      range: `${c.min ?? "…"} to ${c.max ?? "…"}`,
+      value: formatFigure(c.value, c.figure),
+      range: `${c.min === undefined ? "…" : formatFigure(c.min, c.figure)} to ${c.max === undefined ? "…" : formatFigure(c.max, c.figure)}`,
       pass: c.pass,
     })),
     plots,

@@ -1,6 +1,7 @@
 /** Numbers as the bench shows them: SI prefixes with the unit, three significant figures. */
 
 const PREFIXES: [number, string][] = [
+  [1e12, "T"],
   [1e9, "G"],
   [1e6, "M"],
   [1e3, "k"],
