@@ -1,3 +1,4 @@
+import { niceAxis } from "@/components/report/plot-geometry";
 import type { AcResult } from "@/sim";
 
 /** Drawing box of the plot in SVG units; the SVG scales to its container's width. */
@@ -31,22 +32,33 @@ export function ResponsePlot({
   const values = quantity === "magnitude" ? ac.magnitude_db : ac.phase_deg;
   const points = ac.frequency
     .map((f, i) => ({ f, v: values[i] }))
-    .filter((p) => Number.isFinite(p.v) && (fromHz === undefined || p.f >= fromHz) && (toHz === undefined || p.f <= toHz));
+    .filter(
+      (p) => Number.isFinite(p.v) && (fromHz === undefined || p.f >= fromHz) && (toHz === undefined || p.f <= toHz),
+    );
   if (points.length < 2) return <p className="text-sm text-ink-soft">No response points in this frequency range.</p>;
   const f0 = Math.log10(points[0].f);
   const f1 = Math.log10(points[points.length - 1].f);
   let lo = Math.min(...points.map((p) => p.v));
   let hi = Math.max(...points.map((p) => p.v));
   if (hi - lo < 6) [lo, hi] = [lo - 3, hi + 3];
+  // round ticks, as in the sign-off report's plots
+  const axis = niceAxis(lo, hi);
+  [lo, hi] = [axis.lo, axis.hi];
   const x = (f: number) => PAD.left + ((Math.log10(f) - f0) / (f1 - f0 || 1)) * (W - PAD.left - PAD.right);
   const y = (v: number) => PAD.top + ((hi - v) / (hi - lo)) * (H - PAD.top - PAD.bottom);
   const path = points.map((p, i) => `${i ? "L" : "M"}${x(p.f).toFixed(1)},${y(p.v).toFixed(1)}`).join("");
   const unit = quantity === "magnitude" ? "dB" : "°";
-  const ticks = Array.from({ length: 4 }, (_, i) => lo + ((hi - lo) * i) / 3);
+  const ticks = axis.ticks;
   return (
     <figure className="rounded-md border border-rule bg-paper p-2">
       <svg viewBox={`0 0 ${W} ${H}`} className="h-auto w-full" role="img" aria-label={label}>
-        <rect x={PAD.left} y={PAD.top} width={W - PAD.left - PAD.right} height={H - PAD.top - PAD.bottom} className="fill-paper-deep/40" />
+        <rect
+          x={PAD.left}
+          y={PAD.top}
+          width={W - PAD.left - PAD.right}
+          height={H - PAD.top - PAD.bottom}
+          className="fill-paper-deep/40"
+        />
         {DECADES.filter((d) => Math.log10(d) >= f0 - 1e-9 && Math.log10(d) <= f1 + 1e-9).map((d) => (
           <g key={d}>
             <line x1={x(d)} x2={x(d)} y1={PAD.top} y2={H - PAD.bottom} className="stroke-rule" strokeWidth={1} />
@@ -57,9 +69,17 @@ export function ResponsePlot({
         ))}
         {ticks.map((t) => (
           <g key={t}>
-            <line x1={PAD.left} x2={W - PAD.right} y1={y(t)} y2={y(t)} className="stroke-rule" strokeWidth={1} strokeDasharray="2 3" />
+            <line
+              x1={PAD.left}
+              x2={W - PAD.right}
+              y1={y(t)}
+              y2={y(t)}
+              className="stroke-rule"
+              strokeWidth={1}
+              strokeDasharray="2 3"
+            />
             <text x={PAD.left - 6} y={y(t) + 4} textAnchor="end" className="fill-ink-soft font-mono text-[13px]">
-              {t.toFixed(0)}
+              {String(t).replace("-", "−")}
             </text>
           </g>
         ))}

@@ -39,6 +39,19 @@ function niceStep(span: number): number {
   return 10 * p;
 }
 
+/**
+ * A linear axis from `lo` to `hi` widened to whole steps of 1, 2 or 5 × a power of ten (about five of them), so
+ * the ticks read as round numbers (common practice for chart axes): −76…−38 dB becomes −80…−30 in steps of 10.
+ */
+export function niceAxis(lo: number, hi: number): { lo: number; hi: number; step: number; ticks: number[] } {
+  const step = niceStep(hi - lo || 1);
+  const from = Math.floor(lo / step) * step;
+  const to = Math.ceil(hi / step) * step;
+  const ticks: number[] = [];
+  for (let v = from; v <= to + step / 1000; v += step) ticks.push(Number(v.toFixed(6)));
+  return { lo: from, hi: to, step, ticks };
+}
+
 const hzLabel = (hz: number) => (hz >= 1000 ? `${hz / 1000}k` : String(hz));
 const siLabel = (v: number) => {
   const e = Math.floor(Math.log10(v));
@@ -47,6 +60,13 @@ const siLabel = (v: number) => {
   const prefix = prefixes[base];
   return prefix === undefined ? v.toExponential(0) : `${Number((v / 10 ** base).toPrecision(2))}${prefix}`;
 };
+
+/** A log axis (values are decades) widened to whole decades, one tick each. */
+function niceLogAxis(lo: number, hi: number) {
+  const from = Math.floor(lo);
+  const to = Math.ceil(hi);
+  return { lo: from, hi: to, step: 1, ticks: Array.from({ length: to - from + 1 }, (_, i) => from + i) };
+}
 
 export function plotGeometry(series: PlotSeries[], box: PlotBox): PlotGeometry | null {
   const frame = {
@@ -76,9 +96,10 @@ export function plotGeometry(series: PlotSeries[], box: PlotBox): PlotGeometry |
     y0 = mid - half;
     y1 = mid + half;
   }
-  const step = box.yLog ? 1 : niceStep(y1 - y0);
-  y0 = Math.floor(y0 / step) * step;
-  y1 = Math.ceil(y1 / step) * step;
+  const axis = box.yLog ? niceLogAxis(y0, y1) : niceAxis(y0, y1);
+  const step = axis.step;
+  y0 = axis.lo;
+  y1 = axis.hi;
   const x = (f: number) => frame.x + ((Math.log10(f) - lx0) / (lx1 - lx0 || 1)) * frame.width;
   const y = (v: number) => frame.y + ((y1 - v) / (y1 - y0 || 1)) * frame.height;
   const paths = series.map((s) => {
@@ -96,10 +117,8 @@ export function plotGeometry(series: PlotSeries[], box: PlotBox): PlotGeometry |
     return { d: d.trim(), colour: s.colour, dashed: Boolean(s.dashed), label: s.label };
   });
   const xTicks = [];
-  for (let p = Math.ceil(lx0 - 1e-9); p <= Math.floor(lx1 + 1e-9); p++) xTicks.push({ x: x(10 ** p), label: hzLabel(10 ** p) });
-  const yTicks = [];
-  for (let v = y0; v <= y1 + step / 1000; v += step) {
-    yTicks.push({ y: y(v), label: box.yLog ? siLabel(10 ** v) : String(Number(v.toFixed(6))) });
-  }
+  for (let p = Math.ceil(lx0 - 1e-9); p <= Math.floor(lx1 + 1e-9); p++)
+    xTicks.push({ x: x(10 ** p), label: hzLabel(10 ** p) });
+  const yTicks = axis.ticks.map((v) => ({ y: y(v), label: box.yLog ? siLabel(10 ** v) : String(v) }));
   return { width: box.width, height: box.height, frame, paths, xTicks, yTicks, yUnit: box.yUnit };
 }
