@@ -97,7 +97,6 @@ export function plotGeometry(series: PlotSeries[], box: PlotBox): PlotGeometry |
     y1 = mid + half;
   }
   const axis = box.yLog ? niceLogAxis(y0, y1) : niceAxis(y0, y1);
-  const step = axis.step;
   y0 = axis.lo;
   y1 = axis.hi;
   const x = (f: number) => frame.x + ((Math.log10(f) - lx0) / (lx1 - lx0 || 1)) * frame.width;
