@@ -9,6 +9,9 @@ const H = 250;
 const PAD = { left: 44, right: 22, top: 26, bottom: 34 };
 const DECADES = [1, 10, 100, 1e3, 1e4, 1e5, 1e6];
 
+/** Phase ticks in the steps a phase plot is read in (degrees). */
+const PHASE_STEPS = [15, 30, 45, 90, 180];
+
 const hz = (f: number) => (f >= 1000 ? `${f / 1000}k` : String(f));
 
 /**
@@ -42,7 +45,7 @@ export function ResponsePlot({
   let hi = Math.max(...points.map((p) => p.v));
   if (hi - lo < 6) [lo, hi] = [lo - 3, hi + 3];
   // round ticks, as in the sign-off report's plots
-  const axis = niceAxis(lo, hi);
+  const axis = niceAxis(lo, hi, quantity === "phase" ? PHASE_STEPS : undefined);
   [lo, hi] = [axis.lo, axis.hi];
   const x = (f: number) => PAD.left + ((Math.log10(f) - f0) / (f1 - f0 || 1)) * (W - PAD.left - PAD.right);
   const y = (v: number) => PAD.top + ((hi - v) / (hi - lo)) * (H - PAD.top - PAD.bottom);

@@ -11,6 +11,10 @@ describe("round axis ticks", () => {
     expect(niceAxis(0.2, 0.9)).toEqual({ lo: 0.2, hi: 1, step: 0.2, ticks: [0.2, 0.4, 0.6, 0.8, 1] });
   });
 
+  it("takes a phase axis in the steps given: 45° for −180…0°", () => {
+    expect(niceAxis(-178, -2, [15, 30, 45, 90, 180]).ticks).toEqual([-180, -135, -90, -45, 0]);
+  });
+
   it("gives the report's plot the same ticks, and whole decades on a log axis", () => {
     const series = [{ label: "s", colour: "#000", frequency: [10, 100, 1000], values: [-76, -40, -38] }];
     const plot = plotGeometry(series, { width: 400, height: 200, yUnit: "dB" });

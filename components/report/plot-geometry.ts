@@ -43,8 +43,14 @@ function niceStep(span: number): number {
  * A linear axis from `lo` to `hi` widened to whole steps of 1, 2 or 5 × a power of ten (about five of them), so
  * the ticks read as round numbers (common practice for chart axes): −76…−38 dB becomes −80…−30 in steps of 10.
  */
-export function niceAxis(lo: number, hi: number): { lo: number; hi: number; step: number; ticks: number[] } {
-  const step = niceStep(hi - lo || 1);
+export function niceAxis(
+  lo: number,
+  hi: number,
+  /** steps to choose from instead of the 1-2-5 sequence (phase reads in 45° and 90°): the smallest giving ≤ 5 intervals */
+  steps?: readonly number[],
+): { lo: number; hi: number; step: number; ticks: number[] } {
+  const span = hi - lo || 1;
+  const step = steps?.find((s) => span / s <= 5) ?? niceStep(span);
   const from = Math.floor(lo / step) * step;
   const to = Math.ceil(hi / step) * step;
   const ticks: number[] = [];
