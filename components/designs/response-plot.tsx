@@ -2,7 +2,8 @@ import { niceAxis } from "@/components/report/plot-geometry";
 import type { AcResult } from "@/sim";
 
 /** Drawing box of the plot in SVG units; the SVG scales to its container's width. */
-// 520 wide keeps the 13-unit labels readable both at a phone's ~340 px and a desktop column's ~700 px.
+// 520 wide keeps the 13-unit labels readable both at a phone's ~340 px and a desktop column's ~700 px; the figure is
+// kept to 720 px, so in a wider column (a bench link's page) the labels do not grow past about 18 px
 const W = 520;
 const H = 250;
 // right leaves half a "100k" label beside the last decade line; top keeps the unit clear of the highest tick label
@@ -53,7 +54,7 @@ export function ResponsePlot({
   const unit = quantity === "magnitude" ? "dB" : "°";
   const ticks = axis.ticks;
   return (
-    <figure className="rounded-md border border-rule bg-paper p-2">
+    <figure className="max-w-[720px] rounded-md border border-rule bg-paper p-2">
       <svg viewBox={`0 0 ${W} ${H}`} className="h-auto w-full" role="img" aria-label={label}>
         <rect
           x={PAD.left}
