@@ -2,6 +2,7 @@
  * A small SVG of the difference curve (measurement − simulation: aligned for a response, as measured for a noise
  * spectrum) on a log-f axis, with the band shaded.
  */
+import { niceAxis } from "@/components/report/plot-geometry";
 import { PLOT_COLOURS } from "../plots/palette";
 import type { Comparison } from "./compare";
 
@@ -14,7 +15,9 @@ export function DifferencePlot({ comparison }: { comparison: Pick<Comparison, "f
   if (f.length < 2) return null;
   const lx0 = Math.log10(f[0]);
   const lx1 = Math.log10(f[f.length - 1]);
-  const span = Math.max(1, ...d.map(Math.abs));
+  // symmetric about 0 dB, widened to round ticks (the report's axis rule)
+  const axis = niceAxis(-Math.max(1, ...d.map(Math.abs)), Math.max(1, ...d.map(Math.abs)));
+  const span = Math.max(-axis.lo, axis.hi);
   const x = (hz: number) => PAD.l + ((Math.log10(hz) - lx0) / (lx1 - lx0 || 1)) * (W - PAD.l - PAD.r);
   const y = (db: number) => PAD.t + ((span - db) / (2 * span)) * (H - PAD.t - PAD.b);
   const path = f.map((hz, i) => `${i ? "L" : "M"}${x(hz).toFixed(1)},${y(d[i]).toFixed(1)}`).join("");
@@ -34,8 +37,16 @@ export function DifferencePlot({ comparison }: { comparison: Pick<Comparison, "f
           </text>
         </g>
       ))}
-      <text x={4} y={y(span) + 8} fontSize={10} fill={PLOT_COLOURS.inkSoft}>+{span.toFixed(1)}</text>
-      <text x={4} y={y(-span)} fontSize={10} fill={PLOT_COLOURS.inkSoft}>−{span.toFixed(1)}</text>
+      {axis.ticks.map((db) => (
+        <g key={db}>
+          {db !== 0 && (
+            <line x1={PAD.l} x2={W - PAD.r} y1={y(db)} y2={y(db)} stroke={PLOT_COLOURS.rule} strokeDasharray="1 4" />
+          )}
+          <text x={PAD.l - 4} y={y(db) + 3.5} fontSize={10} textAnchor="end" fill={PLOT_COLOURS.inkSoft}>
+            {db > 0 ? `+${db}` : db < 0 ? `−${-db}` : "0 dB"}
+          </text>
+        </g>
+      ))}
       <path d={path} fill="none" stroke="#b27a24" strokeWidth={1.8} />
     </svg>
   );
