@@ -2,7 +2,7 @@
 
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { type ColumnDef, flexRender, getCoreRowModel, type SortingState, useReactTable } from "@tanstack/react-table";
-import Link from "next/link";
+import { PageLink } from "@/components/ui/page-link";
 import { useEffect, useMemo, useState } from "react";
 import { DESIGN_STATUS_LABELS, DESIGN_STATUSES, type DesignSort, type DesignStatus } from "@/components/schemas/design";
 import { Notice } from "@/components/ui/notice";
@@ -75,9 +75,9 @@ export function DesignsTable({ workspaceId, slug, canRestore }: { workspaceId: s
           row.original.deletedAt ? (
             <span className="font-medium text-ink-soft">{row.original.title}</span>
           ) : (
-            <Link href={`/w/${slug}/designs/${row.original.id}`} className="font-medium text-ink underline-offset-2 hover:underline">
+            <PageLink href={`/w/${slug}/designs/${row.original.id}`} className="font-medium text-ink underline-offset-2 hover:underline">
               {row.original.title}
-            </Link>
+            </PageLink>
           ),
       },
       { id: "status", header: "Status", accessorKey: "status", cell: ({ row }) => <StatusBadge status={row.original.status} /> },

@@ -1,7 +1,7 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import Link from "next/link";
+import { PageLink } from "@/components/ui/page-link";
 import { usePathname } from "next/navigation";
 import { apiFetch } from "@/components/api/client";
 
@@ -19,7 +19,7 @@ export function InboxLink() {
   });
   const count = unread.data?.unread ?? 0;
   return (
-    <Link
+    <PageLink
       href="/inbox"
       className="flex items-center gap-1.5 whitespace-nowrap rounded px-2 py-1 text-sm text-paper/90 hover:bg-graphite hover:text-brass-light"
       data-testid="inbox-link"
@@ -31,6 +31,6 @@ export function InboxLink() {
           <span className="sr-only"> unread</span>
         </span>
       ) : null}
-    </Link>
+    </PageLink>
   );
 }

@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { PageLink } from "@/components/ui/page-link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { apiFetch } from "@/components/api/client";
@@ -40,14 +40,14 @@ export function InboxList({ items }: { items: InboxItem[] }) {
       <ul className="divide-y divide-rule rounded-md border border-rule bg-paper">
         {items.map((item) => (
           <li key={item.id} className={item.readAt ? "" : "bg-brass-light/15"}>
-            <Link href={item.link} className="block px-4 py-3" onClick={() => (item.readAt ? undefined : void mark({ ids: [item.id] }))}>
+            <PageLink href={item.link} className="block px-4 py-3" onClick={() => (item.readAt ? undefined : void mark({ ids: [item.id] }))}>
               <span className="flex items-start justify-between gap-3">
                 <span className={`min-w-0 break-words ${item.readAt ? "" : "font-semibold"}`}>{item.title}</span>
                 {!item.readAt ? <span className="mt-1 shrink-0 text-xs text-brass-deep">unread</span> : null}
               </span>
               {item.body ? <span className="mt-1 line-clamp-2 block text-sm text-ink-soft">{item.body}</span> : null}
               <span className="mt-1 block text-xs text-ink-soft">{formatTime(item.createdAt)}</span>
-            </Link>
+            </PageLink>
           </li>
         ))}
       </ul>

@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { PageLink } from "@/components/ui/page-link";
 import { usePathname } from "next/navigation";
 import { signOut, useSession } from "next-auth/react";
 import { useMyWorkspaces } from "@/components/workspaces/use-workspaces";
@@ -19,13 +19,13 @@ function NavList({ links, pathname, label }: { links: NavLink[]; pathname: strin
           const current = link.href === pathname;
           return (
             <li key={link.href}>
-              <Link
+              <PageLink
                 href={link.href}
                 aria-current={current ? "page" : undefined}
                 className="whitespace-nowrap hover:text-brass-light aria-[current=page]:text-brass-light"
               >
                 {link.label}
-              </Link>
+              </PageLink>
             </li>
           );
         })}
@@ -52,15 +52,15 @@ export function HeaderNav({ serverUser }: { serverUser: HeaderUser | null }) {
       <>
         <NavList links={PUBLIC_NAV} pathname={pathname} label="Main" />
         <div className="ml-auto flex items-center gap-3 text-sm">
-          <Link href="/sign-in" className="whitespace-nowrap text-paper/90 hover:text-brass-light">
+          <PageLink href="/sign-in" className="whitespace-nowrap text-paper/90 hover:text-brass-light">
             Sign in
-          </Link>
-          <Link
+          </PageLink>
+          <PageLink
             href="/sign-up"
             className="whitespace-nowrap rounded-md bg-brass px-3 py-1.5 font-medium text-ink hover:bg-brass-light"
           >
             Create account
-          </Link>
+          </PageLink>
         </div>
       </>
     );
@@ -75,13 +75,13 @@ export function HeaderNav({ serverUser }: { serverUser: HeaderUser | null }) {
     <>
       {current ? <NavList links={workspaceNav(current.slug, current.role)} pathname={pathname} label="Workspace" /> : null}
       <div className="ml-auto flex items-center gap-3 text-sm">
-        <Link
+        <PageLink
           href="/workspaces"
           className="hidden max-w-48 truncate rounded border border-graphite px-2 py-1 text-paper/80 hover:border-brass hover:text-brass-light sm:inline"
           title="Switch workspace"
         >
           {current ? current.name : "Workspaces"}
-        </Link>
+        </PageLink>
         {/* Re-keyed on every page change so the menu closes after a link in it is followed. */}
         <details key={pathname} className="relative">
           <summary className="flex cursor-pointer list-none items-center gap-1.5 rounded px-2 py-1 hover:bg-graphite">
@@ -95,14 +95,14 @@ export function HeaderNav({ serverUser }: { serverUser: HeaderUser | null }) {
           </summary>
           <ul className="absolute right-0 z-40 mt-2 w-48 overflow-hidden rounded-md border border-rule bg-paper py-1 text-ink shadow-lg">
             <li>
-              <Link href="/account" className="block px-3 py-2 hover:bg-paper-deep">
+              <PageLink href="/account" className="block px-3 py-2 hover:bg-paper-deep">
                 Account
-              </Link>
+              </PageLink>
             </li>
             <li>
-              <Link href="/workspaces" className="block px-3 py-2 hover:bg-paper-deep">
+              <PageLink href="/workspaces" className="block px-3 py-2 hover:bg-paper-deep">
                 Workspaces
-              </Link>
+              </PageLink>
             </li>
             <li>
               <button

@@ -2,7 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import Link from "next/link";
+import { PageLink } from "@/components/ui/page-link";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { ApiError, apiFetch } from "@/components/api/client";
@@ -36,7 +36,7 @@ export function WorkspaceList() {
           <ul className="flex flex-col gap-3">
             {workspaces.data.map((workspace) => (
               <li key={workspace.workspaceId}>
-                <Link
+                <PageLink
                   href={`/w/${workspace.slug}`}
                   className="flex items-center justify-between rounded-lg border border-rule bg-paper p-4 hover:border-brass"
                 >
@@ -47,7 +47,7 @@ export function WorkspaceList() {
                   <span className="rounded-full bg-paper-deep px-3 py-1 text-xs font-medium text-ink-soft">
                     {ROLE_LABELS[workspace.role]}
                   </span>
-                </Link>
+                </PageLink>
               </li>
             ))}
           </ul>
