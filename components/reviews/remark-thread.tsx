@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { PageLink } from "@/components/ui/page-link";
 import { useState } from "react";
 import { formatTime } from "@/components/designs/format-time";
 import { createRemarkSchema, type RemarkAnchor } from "@/components/schemas/review";
@@ -55,9 +55,9 @@ export function RemarkThread({ thread, reviewId, benchPath, canRemark }: { threa
         </ol>
       ) : null}
       <div className="mt-2 flex flex-wrap items-center gap-3 text-sm">
-        <Link href={`${benchPath}${anchorQuery(thread.anchor)}`} className="text-brass-deep underline underline-offset-2">
+        <PageLink href={`${benchPath}${anchorQuery(thread.anchor)}`} className="text-brass-deep underline underline-offset-2">
           Open on the bench
-        </Link>
+        </PageLink>
         {canRemark ? (
           <button type="button" className="underline underline-offset-2" disabled={resolving.busy} onClick={() => resolving.submit({ parentId: thread.id })}>
             {resolved ? "Reopen" : "Resolve"}

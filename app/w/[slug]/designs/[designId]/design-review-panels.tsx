@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { PageLink } from "@/components/ui/page-link";
 import { can } from "@/components/auth/roles";
 import { ChecksBadge, ChecksTable } from "@/components/reviews/checks-panel";
 import { RequestReviewDialog } from "@/components/reviews/request-review-dialog";
@@ -61,12 +61,12 @@ export async function DesignReviewPanels({
         <ul className="divide-y divide-rule text-sm">
           {reviews.map((r) => (
             <li key={r.id} className="py-2">
-              <Link href={`/w/${slug}/designs/${designId}/reviews/${r.id}`} className="block">
+              <PageLink href={`/w/${slug}/designs/${designId}/reviews/${r.id}`} className="block">
                 <span className="font-mono font-semibold">r{r.revisionNumber}</span> · {REVIEW_WORDS[r.status]}
                 <span className="block text-xs text-ink-soft">
                   asked by {r.requestedByName ?? "—"} of {r.reviewerNames.map((n) => n ?? "—").join(", ")}
                 </span>
-              </Link>
+              </PageLink>
             </li>
           ))}
         </ul>

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { PageLink } from "@/components/ui/page-link";
 import { notFound } from "next/navigation";
 import { requireWorkspacePage } from "@/app/_server/workspace-page";
 import { AttachmentsPanel } from "@/components/attachments/attachments-panel";
@@ -56,9 +56,9 @@ export default async function DesignPage({ params, searchParams }: Props) {
   return (
     <div className="mx-auto w-full max-w-6xl px-4 py-8 sm:px-6">
       <nav aria-label="Breadcrumb" className="mb-3 text-sm text-ink-soft">
-        <Link href={`/w/${slug}`} className="underline-offset-2 hover:underline">
+        <PageLink href={`/w/${slug}`} className="underline-offset-2 hover:underline">
           {membership.name} · Designs
-        </Link>
+        </PageLink>
       </nav>
       <header className="mb-6 space-y-2 border-b border-rule pb-4">
         <div className="flex flex-wrap items-center gap-3">
@@ -66,9 +66,9 @@ export default async function DesignPage({ params, searchParams }: Props) {
           <StatusBadge status={design.status} />
         </div>
         {!deleted ? (
-          <Link href={`/w/${slug}/designs/${designId}/bench`} className="inline-block rounded bg-graphite px-3 py-1.5 text-sm font-semibold text-paper hover:bg-ink">
+          <PageLink href={`/w/${slug}/designs/${designId}/bench`} className="inline-block rounded bg-graphite px-3 py-1.5 text-sm font-semibold text-paper hover:bg-ink">
             {can(role, "revision.create") ? "Open the bench" : "Open the bench (read-only)"}
-          </Link>
+          </PageLink>
         ) : null}
         <p className="text-sm text-ink-soft">
           {head ? (
@@ -108,19 +108,19 @@ export default async function DesignPage({ params, searchParams }: Props) {
               <ol className="divide-y divide-rule text-sm" aria-label="Revisions, newest first">
                 {revisions.map((rev) => (
                   <li key={rev.id} className={`flex items-start justify-between gap-2 py-2 ${rev.id === selected?.id ? "bg-brass-light/20" : ""}`}>
-                    <Link href={`?r=${rev.id}`} scroll={false} className="min-w-0 flex-1">
+                    <PageLink href={`?r=${rev.id}`} scroll={false} className="min-w-0 flex-1">
                       <span className="font-mono font-semibold">r{rev.number}</span> <span className="break-words">{rev.message}</span>
                       <span className="block text-xs text-ink-soft">
                         {rev.authorName ?? "—"} · {formatTime(rev.createdAt)}
                       </span>
-                    </Link>
+                    </PageLink>
                     <span className="flex shrink-0 flex-col items-end gap-1">
                       <a href={exportUrl(rev.id)} className="text-xs underline" download>
                         Export
                       </a>
-                      <Link href={`/w/${slug}/designs/${designId}/revisions/${rev.id}/report`} className="text-xs underline">
+                      <PageLink href={`/w/${slug}/designs/${designId}/revisions/${rev.id}/report`} className="text-xs underline">
                         Sign-off report
-                      </Link>
+                      </PageLink>
                       {can(role, "revision.create") && head && rev.id !== head.id ? (
                         <RestoreRevisionButton workspaceId={workspaceId} designId={designId} revisionId={rev.id} number={rev.number} headRevisionId={head.id} />
                       ) : null}

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { PageLink } from "@/components/ui/page-link";
 import { ChecksBadge } from "@/components/reviews/checks-panel";
 import { getRevisionChecks } from "@/db/revision-checks";
 
@@ -10,9 +10,9 @@ export async function BenchChecks({ revisionId, designPath }: { revisionId: stri
     <span className="ml-2 inline-flex items-center gap-1.5" title={missed.length ? `Missed: ${missed.join(", ")}` : undefined}>
       <ChecksBadge allPass={checks.allPass} checks={checks.checks} />
       {missed.length ? (
-        <Link href={designPath} className="underline" data-testid="bench-missed">
+        <PageLink href={designPath} className="underline" data-testid="bench-missed">
           missed: {missed.join(", ")}
-        </Link>
+        </PageLink>
       ) : null}
     </span>
   );

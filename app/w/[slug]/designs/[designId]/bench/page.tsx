@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { PageLink } from "@/components/ui/page-link";
 import { notFound } from "next/navigation";
 import { requireWorkspacePage } from "@/app/_server/workspace-page";
 import { can } from "@/components/auth/roles";
@@ -30,13 +30,13 @@ export default async function BenchPage({ params }: Props) {
     return (
       <div className="w-full">
         <nav aria-label="Breadcrumb" className="truncate border-b border-rule px-3 py-1.5 text-xs text-ink-soft">
-          <Link href={`/w/${slug}`} className="hover:underline">
+          <PageLink href={`/w/${slug}`} className="hover:underline">
             {membership.name}
-          </Link>{" "}
+          </PageLink>{" "}
           ·{" "}
-          <Link href={`/w/${slug}/designs/${designId}`} className="hover:underline">
+          <PageLink href={`/w/${slug}/designs/${designId}`} className="hover:underline">
             {design.title}
-          </Link>{" "}
+          </PageLink>{" "}
           · Bench
           {head ? <BenchChecks revisionId={head.id} designPath={`/w/${slug}/designs/${designId}`} /> : null}
         </nav>

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { PageLink } from "@/components/ui/page-link";
 import { notFound } from "next/navigation";
 import { requireWorkspacePage } from "@/app/_server/workspace-page";
 import { AttachmentsPanel } from "@/components/attachments/attachments-panel";
@@ -86,13 +86,13 @@ export default async function ReviewPage({ params }: Props) {
   return (
     <div className="mx-auto w-full max-w-6xl px-4 py-8 sm:px-6">
       <nav aria-label="Breadcrumb" className="mb-3 text-sm text-ink-soft">
-        <Link href={`/w/${slug}`} className="underline-offset-2 hover:underline">
+        <PageLink href={`/w/${slug}`} className="underline-offset-2 hover:underline">
           {membership.name}
-        </Link>{" "}
+        </PageLink>{" "}
         ·{" "}
-        <Link href={`/w/${slug}/designs/${designId}`} className="underline-offset-2 hover:underline">
+        <PageLink href={`/w/${slug}/designs/${designId}`} className="underline-offset-2 hover:underline">
           {review.designTitle}
-        </Link>{" "}
+        </PageLink>{" "}
         · Review
       </nav>
       <header className="mb-6 space-y-2 border-b border-rule pb-4">
@@ -119,9 +119,9 @@ export default async function ReviewPage({ params }: Props) {
           <Panel title={`r${review.revision.number}: ${review.revision.message}`}>
             <p className="text-sm text-ink-soft">
               Saved by {review.revision.authorName ?? "—"}, {formatTime(review.revision.createdAt)} ·{" "}
-              <Link href={benchPath} className="text-brass-deep underline underline-offset-2">
+              <PageLink href={benchPath} className="text-brass-deep underline underline-offset-2">
                 Open the bench
-              </Link>
+              </PageLink>
             </p>
             <dl className="grid grid-cols-1 gap-x-6 gap-y-1 text-sm sm:grid-cols-2" aria-label="Figures">
               {figures.map((f) => (

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { headers } from "next/headers";
-import Link from "next/link";
+import { PageLink } from "@/components/ui/page-link";
 import { notFound } from "next/navigation";
 import { requireWorkspacePage } from "@/app/_server/workspace-page";
 import { loadReport } from "@/app/_server/sign-off/load-report";
@@ -31,9 +31,9 @@ export default async function ReportPage({ params }: Props) {
     return (
       <div className="mx-auto w-full max-w-4xl px-4 py-8 sm:px-6">
         <nav aria-label="Breadcrumb" className="mb-3 text-sm text-ink-soft">
-          <Link href={`/w/${slug}/designs/${designId}`} className="underline-offset-2 hover:underline">
+          <PageLink href={`/w/${slug}/designs/${designId}`} className="underline-offset-2 hover:underline">
             {report.title} · r{report.revisionNumber}
-          </Link>
+          </PageLink>
         </nav>
         <div className="mb-6 flex flex-wrap items-end gap-4 rounded-md border border-rule bg-paper-deep/40 p-3">
           <a href={api} className="rounded bg-brass px-3 py-1.5 text-sm font-semibold text-ink hover:bg-brass-deep hover:text-paper" download>
