@@ -34,7 +34,12 @@ export async function seedReviews(db: SeedDb, workspaceId: string): Promise<void
     .orderBy(desc(designRevisions.number))
     .limit(1);
   const person = async (email: string) => (await db.select({ id: users.id }).from(users).where(eq(users.email, email)))[0]?.id;
-  const [ines, margit, orla, tomas] = await Promise.all([person(INES), person(MARGIT), person(ORLA), person(TOMAS)]);
+  // one after another: `db` is a transaction, one connection, which takes one query at a time (pg warns on more and
+  // refuses from pg 9)
+  const ines = await person(INES);
+  const margit = await person(MARGIT);
+  const orla = await person(ORLA);
+  const tomas = await person(TOMAS);
   if (!revision || !ines || !margit || !orla || !tomas) return;
   const now = Date.now();
   const [review] = await db
