@@ -7,7 +7,7 @@
 import type { BenchDocument } from "../document/document";
 import { groundFootprint, labelFootprint, partLabelRect } from "../document/free-spot";
 import { GRID, type Endpoint } from "../document/layout";
-import { labelLeft } from "../symbols/label-place";
+import { labelLeft, widthUnderSymbol } from "../symbols/label-place";
 import { rotatedPinOffset, rotatedSide, rotatedSize, SYMBOL_BOXES } from "../symbols/pin-layout";
 import type { Obstacle, Point, WireEnd, WireRequest } from "../wiring/orthogonal-router";
 import {
@@ -73,7 +73,7 @@ function partObstacles(node: PartFlowNode): Obstacle[] {
   const left = labelLeft(part.kind, placement.rotation);
   // never narrower than the symbol above it: a short value's edit then moves nothing at all; a label cut back to
   // its room (label-room.ts) is kept at exactly that width, since rounding it up would reach into its neighbour
-  const under = left === null ? size.width : Math.max(0, size.width - left);
+  const under = widthUnderSymbol(part.kind, placement.rotation);
   const width =
     labelWidth !== null
       ? Math.max(under, labelWidth)
@@ -92,28 +92,33 @@ function obstaclesOf(node: BenchFlowNode): Obstacle[] {
   return [{ id: node.id, ...rect }];
 }
 
+/** Where a drawn item's pin sits on the canvas: a ground's or a net label's one pin, or a part's named pin. */
+function pinPoint(node: BenchFlowNode, pin?: string): Point {
+  const { x, y } = node.position;
+  if (node.type === "ground") return { x: x + GROUND_PIN_OFFSET.x, y: y + GROUND_PIN_OFFSET.y };
+  if (node.type === "netLabel") return { x: x + LABEL_PIN_OFFSET.x, y: y + LABEL_PIN_OFFSET.y };
+  const { part, placement } = node.data;
+  const offset = rotatedPinOffset(part.kind, pin as string, placement.rotation);
+  return { x: placement.x + offset.x, y: placement.y + offset.y };
+}
+
+/** Every pin of a drawn item. */
+function pinPoints(node: BenchFlowNode): Point[] {
+  if (node.type !== "part") return [pinPoint(node)];
+  return Object.keys(SYMBOL_BOXES[node.data.part.kind].pins).map((pin) => pinPoint(node, pin));
+}
+
 function wireEnd(endpoint: Endpoint, nodes: Map<string, BenchFlowNode>): WireEnd | null {
   const owner = handleOfEndpoint(endpoint).node;
   const node = nodes.get(owner);
   if (!node) return null;
-  if (node.type === "ground") {
-    const { x, y } = node.position;
-    return { point: { x: x + GROUND_PIN_OFFSET.x, y: y + GROUND_PIN_OFFSET.y }, side: "top", owner };
-  }
-  if (node.type === "netLabel") {
-    const { x, y } = node.position;
-    return { point: { x: x + LABEL_PIN_OFFSET.x, y: y + LABEL_PIN_OFFSET.y }, side: "left", owner };
-  }
+  if (node.type === "ground") return { point: pinPoint(node), side: "top", owner };
+  if (node.type === "netLabel") return { point: pinPoint(node), side: "left", owner };
   if (endpoint.kind !== "pin") return null;
   const { part, placement } = node.data;
   const place = SYMBOL_BOXES[part.kind].pins[endpoint.pin];
   if (!place) return null;
-  const offset = rotatedPinOffset(part.kind, endpoint.pin, placement.rotation);
-  return {
-    point: { x: placement.x + offset.x, y: placement.y + offset.y },
-    side: rotatedSide(place.side, placement.rotation),
-    owner,
-  };
+  return { point: pinPoint(node, endpoint.pin), side: rotatedSide(place.side, placement.rotation), owner };
 }
 
 export function wireScene(document: BenchDocument, nodes: readonly BenchFlowNode[]): WireScene {
@@ -132,18 +137,6 @@ export function wireScene(document: BenchDocument, nodes: readonly BenchFlowNode
 }
 
 const pointKey = (p: Point) => `${p.x},${p.y}`;
-
-/** Where every pin of a drawn item sits on the canvas. */
-function pinPoints(node: BenchFlowNode): Point[] {
-  const { x, y } = node.position;
-  if (node.type === "ground") return [{ x: x + GROUND_PIN_OFFSET.x, y: y + GROUND_PIN_OFFSET.y }];
-  if (node.type === "netLabel") return [{ x: x + LABEL_PIN_OFFSET.x, y: y + LABEL_PIN_OFFSET.y }];
-  const { part, placement } = node.data;
-  return Object.keys(SYMBOL_BOXES[part.kind].pins).map((pin) => {
-    const offset = rotatedPinOffset(part.kind, pin, placement.rotation);
-    return { x: placement.x + offset.x, y: placement.y + offset.y };
-  });
-}
 
 /** A string equal for two scenes exactly when they route the same. */
 export function sceneKey(scene: WireScene): string {

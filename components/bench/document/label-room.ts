@@ -9,8 +9,8 @@
  * narrowest (the symbol's width, or its designator line), so two labels reaching for the same gap can never meet.
  * A label is never cut below its narrowest: in a drawing crowded tighter than that the overlap stays.
  */
-import { labelLeft } from "../symbols/label-place";
-import { rotatedPinOffset, rotatedSide, rotatedSize, SYMBOL_BOXES } from "../symbols/pin-layout";
+import { downwardPinXs, labelLeft, widthUnderSymbol } from "../symbols/label-place";
+import { rotatedSize } from "../symbols/pin-layout";
 import type { BenchPart } from "./circuit";
 import { PART_LABEL_BAND, partLabelRect, type Rect } from "./free-spot";
 import type { Placement } from "./layout";
@@ -35,11 +35,8 @@ interface LabelSpan {
 
 /** The text's width at which a label is never cut further: the designator line, and at least the symbol's width. */
 function narrowestWidth(part: BenchPart, placement: Placement, natural: Rect): number {
-  const size = rotatedSize(part.kind, placement.rotation);
-  const left = labelLeft(part.kind, placement.rotation);
-  const under = left === null ? size.width : Math.max(0, size.width - left);
   const designator = partLabelRect(part, placement, "").width;
-  return Math.min(natural.width, Math.max(under, designator));
+  return Math.min(natural.width, Math.max(widthUnderSymbol(part.kind, placement.rotation), designator));
 }
 
 function spanOf({ part, placement, keyText }: LabelledPart): LabelSpan {
@@ -56,15 +53,13 @@ function spanOf({ part, placement, keyText }: LabelledPart): LabelSpan {
  * reach: a line as deep as the band at the pin, kept clear like any item.
  */
 function downwardWires({ part, placement }: LabelledPart): Rect[] {
-  const size = rotatedSize(part.kind, placement.rotation);
-  return Object.entries(SYMBOL_BOXES[part.kind].pins)
-    .filter(([, place]) => rotatedSide(place.side, placement.rotation) === "bottom")
-    .map(([pin]) => ({
-      x: placement.x + rotatedPinOffset(part.kind, pin, placement.rotation).x - 1,
-      y: placement.y + size.height,
-      width: 2,
-      height: PART_LABEL_BAND,
-    }));
+  const y = placement.y + rotatedSize(part.kind, placement.rotation).height;
+  return downwardPinXs(part.kind, placement.rotation).map((x) => ({
+    x: placement.x + x - 1,
+    y,
+    width: 2,
+    height: PART_LABEL_BAND,
+  }));
 }
 
 const sharesRows = (a: Rect, b: Rect) => a.y < b.y + b.height && b.y < a.y + a.height;
